@@ -25,14 +25,14 @@ import org.locationtech.jts.operation.overlayng.OverlayNG;
  */
 final class StackNoder {
 
-    private static final int MAX_ROUNDS = 4;
+    private static final int MAX_ROUNDS = 6;
 
     private StackNoder() {
     }
 
     static LayeredSolid node(LayeredSolid solid) {
         List<Slab> slabs = solid.slabs();
-        if (slabs.size() < 2) {
+        if (slabs.isEmpty()) {
             return solid;
         }
         GeometryContext ctx = solid.context();
@@ -40,10 +40,17 @@ final class StackNoder {
         for (Slab s : slabs) {
             regions.add(s.region().jts());
         }
+        double[] z0 = new double[slabs.size()];
+        double[] z1 = new double[slabs.size()];
+        for (int i = 0; i < slabs.size(); i++) {
+            z0[i] = slabs.get(i).z0Mm();
+            z1[i] = slabs.get(i).z1Mm();
+        }
         for (int round = 0; round < MAX_ROUNDS; round++) {
             NodeResult r = nodeOnce(ctx, regions);
-            regions = r.regions;
-            if (!r.repaired) {
+            List<Geometry> opened = ContactResolver.open(ctx, r.regions, z0, z1);
+            regions = opened;
+            if (!r.repaired && opened == r.regions) {
                 break;
             }
         }
