@@ -53,14 +53,14 @@ class KernelBenchTest {
 
     @Test
     void tallPlainStack() throws IOException {
-        // equal neighbours: walls only after merging; many slabs to reach ~1M triangles
+        // wall-dominated: a thin ring with a lug crossing its outer edge on every other slab
         Region r = Region.annulus(ctx, 0, 0, 400, 380);
+        Region lugged = r.union(Region.disc(ctx, 0, 201, 12));
         LayeredSolid.Builder b = LayeredSolid.builder(ctx);
-        for (int i = 0; i < 160; i++) {
-            Region ri = i % 2 == 0 ? r : r.rotatedDeg(90).union(Region.disc(ctx, 0, 195, 8));
-            b.slab(i, i + 1, ri);
+        for (int i = 0; i < 600; i++) {
+            b.slab(i * 0.25, (i + 1) * 0.25, i % 2 == 0 ? r : lugged);
         }
-        run("annulus stack, 160 slabs with a boss every other slab", b.build());
+        run("ring stack, 600 slabs, a lug on every other slab", b.build());
     }
 
     private void run(String name, LayeredSolid solid) throws IOException {
