@@ -39,10 +39,11 @@ public final class QuantityFormat {
         return switch (d) {
             case PRESSURE -> number(canonical / 1e5) + " bar(a)";
             case STRESS -> number(canonical / 1e6) + " MPa";
-            case TEMPERATURE -> number(canonical) + " K";
+            case TEMPERATURE -> number(canonical) + " K (" + number(canonical - 273.15) + " degC)";
             case ANGULAR_SPEED -> number(canonical * 60 / (2 * Math.PI)) + " rpm";
             case VOLUME -> number(canonical * 1e3) + " L";
-            case VOLUME_FLOW -> number(canonical * 60e3) + " L/min";
+            case VOLUME_FLOW -> Math.abs(canonical) < 1e-6 ? number(canonical * 1e9) + " mm3/s"
+                    : number(canonical * 60e3) + " L/min";
             case CONDUCTANCE -> number(canonical * 1e8) + " dm3/(s*bar)";
             case MASS -> number(canonical * 1e3) + " g";
             case MASS_FLOW -> number(canonical * 1e3) + " g/s";
