@@ -33,6 +33,20 @@ class DesignResolverTest {
     }
 
     @Test
+    void unknownHardwareIsLocatedWithTheKnownNames() {
+        BadInputException e = assertThrows(BadInputException.class,
+                () -> resolve("name: a\nbearings: 6088\nfasteners:\n  size: M7\nseal: o-ring 1.6 mm\n"));
+        List<String> p = e.problems().stream().map(Problem::format).toList();
+        assertEquals(3, p.size(), String.join("\n", p));
+        assertTrue(p.get(0).startsWith("t.yaml:2:11: bearings: expected auto or a known bearing (623, 624,"), p.get(0));
+        assertTrue(p.get(0).endsWith("found \"6088\"; did you mean 6008?") || p.get(0).contains("did you mean"), p.get(0));
+        assertEquals("t.yaml:4:9: fasteners.size: expected a known screw size (M2, M2.5, M3, M4, M5), found \"M7\"",
+                p.get(1));
+        assertEquals("t.yaml:5:7: seal.size: expected an O-ring cross-section with a gland in the table "
+                + "(1, 1.5, 1.78, 2, 2.5, 2.62, 3, 3.53, 5.33 mm), found 1.6 mm", p.get(2));
+    }
+
+    @Test
     void profileValuesAreSeededAndDefaultsStated() {
         ResolvedDesign d = resolve("name: a\nprinter: fine-0.25\n");
         assertEquals(0.125, d.get(ProfileKeys.LAYER_HEIGHT));
