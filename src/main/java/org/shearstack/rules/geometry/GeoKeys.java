@@ -36,9 +36,9 @@ public final class GeoKeys {
     public static final Key LINE_WIDTH = len("printer.line-width");
     public static final Key NOZZLE_DIAMETER = len("printer.nozzle-diameter");
     /** How much smaller holes print than modelled, on diameter. */
-    public static final Key HOLE_COMPENSATION = len("printer.hole-compensation");
+    public static final Key HOLE_COMPENSATION = len("print.hole-compensation");
     /** How much larger outer dimensions print than modelled, on diameter. */
-    public static final Key OUTER_COMPENSATION = len("printer.outer-compensation");
+    public static final Key OUTER_COMPENSATION = len("print.outer-compensation");
 
     // ------------------------------------------------------------------ inputs: spec and flow sizing
     public static final Key ROTOR_DIAMETER = len("rotor.diameter");
