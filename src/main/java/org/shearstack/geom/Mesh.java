@@ -88,6 +88,66 @@ public final class Mesh {
         return triangles.clone();
     }
 
+    /**
+     * This mesh moved by {@code transform}; same indices (no welding). A mirroring transform reverses every
+     * triangle's winding so normals stay outward.
+     */
+    public Mesh transformed(Transform transform) {
+        double[] out = new double[xyz.length];
+        for (int i = 0; i < xyz.length; i += 3) {
+            double x = xyz[i];
+            double y = xyz[i + 1];
+            double z = xyz[i + 2];
+            out[i] = transform.applyX(x, y, z) + 0.0;
+            out[i + 1] = transform.applyY(x, y, z) + 0.0;
+            out[i + 2] = transform.applyZ(x, y, z) + 0.0;
+        }
+        int[] tri = triangles;
+        if (transform.isMirroring()) {
+            tri = triangles.clone();
+            for (int t = 0; t < tri.length; t += 3) {
+                int b = tri[t + 1];
+                tri[t + 1] = tri[t + 2];
+                tri[t + 2] = b;
+            }
+        }
+        return new Mesh(out, tri);
+    }
+
+    /** The meshes side by side in one mesh (indices offset, nothing welded). */
+    public static Mesh merged(java.util.List<Mesh> meshes) {
+        int nv = 0;
+        int nt = 0;
+        for (Mesh m : meshes) {
+            nv += m.xyz.length;
+            nt += m.triangles.length;
+        }
+        double[] xyz = new double[nv];
+        int[] tri = new int[nt];
+        int vo = 0;
+        int to = 0;
+        for (Mesh m : meshes) {
+            System.arraycopy(m.xyz, 0, xyz, vo, m.xyz.length);
+            int base = vo / 3;
+            for (int i = 0; i < m.triangles.length; i++) {
+                tri[to + i] = m.triangles[i] + base;
+            }
+            vo += m.xyz.length;
+            to += m.triangles.length;
+        }
+        return new Mesh(xyz, tri);
+    }
+
+    /** Direct access for kernel code that only reads (no copy). */
+    double[] xyzUnsafe() {
+        return xyz;
+    }
+
+    /** Direct access for kernel code that only reads (no copy). */
+    int[] trianglesUnsafe() {
+        return triangles;
+    }
+
     @Override
     public boolean equals(Object o) {
         return o instanceof Mesh m && Arrays.equals(xyz, m.xyz) && Arrays.equals(triangles, m.triangles);

@@ -1,0 +1,238 @@
+package org.shearstack.geom;
+
+import java.util.ArrayList;
+import java.util.List;
+
+import org.locationtech.jts.algorithm.Orientation;
+import org.locationtech.jts.geom.Coordinate;
+import org.locationtech.jts.geom.Geometry;
+import org.locationtech.jts.geom.LineString;
+import org.locationtech.jts.geom.Polygon;
+import org.locationtech.jts.operation.overlayng.OverlayNG;
+import org.locationtech.jts.triangulate.polygon.PolygonTriangulator;
+import org.locationtech.jts.triangulate.tri.Tri;
+
+/**
+ * Turns a layered solid into a closed indexed mesh (DESIGN §2, kernel-notes recipe):
+ * <ol>
+ * <li>merge neighbouring slabs with equal regions;</li>
+ * <li>at every interface z (A below, B above, either may be empty) the up face is A − B and the down face
+ * B − A (OverlayNG on the grid); the interface's node set is every vertex of A, B and both faces;</li>
+ * <li>each slab wall segment is split at the node-set points whose hot pixel (the snap-rounding criterion)
+ * it crosses, separately at its bottom and top, and the two chains are zipped into triangles;</li>
+ * <li>faces are triangulated from their boundary vertices only (JTS PolygonTriangulator: hole joining plus
+ * ear clipping, no Steiner points) and each triangle's winding is forced (up faces CCW, down faces CW
+ * seen from above);</li>
+ * <li>vertices are shared by grid key while they are created, never welded afterwards.</li>
+ * </ol>
+ * When the solid has been {@link LayeredSolid#noded() noded}, no wall needs splitting and every slab is an
+ * exact prism.
+ */
+final class StackMesher {
+
+    private final GeometryContext ctx;
+    private final VertexTable vertices;
+    private final IntList triangles;
+    private int wallSplits;
+
+    private StackMesher(GeometryContext ctx, int expectedTriangles) {
+        this.ctx = ctx;
+        this.vertices = new VertexTable(ctx.scale());
+        this.triangles = new IntList(3 * expectedTriangles);
+    }
+
+    static Mesh mesh(LayeredSolid solid) {
+        return build(solid).mesh;
+    }
+
+    /** The mesh together with the number of wall splits needed (0 for a fully noded solid). */
+    static Result build(LayeredSolid solid) {
+        List<Band> bands = mergeEqual(solid.slabs());
+        int points = 0;
+        for (Band b : bands) {
+            points += b.geometry.getNumPoints();
+        }
+        StackMesher m = new StackMesher(solid.context(), 4 * points);
+        m.run(bands);
+        return new Result(Mesh.ownedCopy(m.vertices.coordinates(), m.triangles.toArray()), m.wallSplits);
+    }
+
+    record Result(Mesh mesh, int wallSplits) {
+    }
+
+    private record Band(double z0, double z1, Geometry geometry) {
+    }
+
+    private static List<Band> mergeEqual(List<Slab> slabs) {
+        List<Band> out = new ArrayList<>();
+        for (Slab s : slabs) {
+            Geometry g = s.region().jts();
+            if (!out.isEmpty()) {
+                Band last = out.get(out.size() - 1);
+                if (last.z1 == s.z0Mm() && sameGeometry(last.geometry, g)) {
+                    out.set(out.size() - 1, new Band(last.z0, s.z1Mm(), last.geometry));
+                    continue;
+                }
+            }
+            out.add(new Band(s.z0Mm(), s.z1Mm(), g));
+        }
+        return out;
+    }
+
+    private static boolean sameGeometry(Geometry a, Geometry b) {
+        if (a == b) {
+            return true;
+        }
+        return a.getNumPoints() == b.getNumPoints() && a.getEnvelopeInternal().equals(b.getEnvelopeInternal())
+                && a.equalsNorm(b);
+    }
+
+    private void run(List<Band> bands) {
+        int n = bands.size();
+        NodeIndex[] below = new NodeIndex[n];
+        NodeIndex[] above = new NodeIndex[n];
+        for (int i = 0; i < n; i++) {
+            Band b = bands.get(i);
+            if (i == 0 || bands.get(i - 1).z1 != b.z0) {
+                below[i] = face(b.z0, null, b.geometry);
+            }
+            Band next = i + 1 < n ? bands.get(i + 1) : null;
+            if (next != null && next.z0 == b.z1) {
+                NodeIndex shared = face(b.z1, b.geometry, next.geometry);
+                above[i] = shared;
+                below[i + 1] = shared;
+            } else {
+                above[i] = face(b.z1, b.geometry, null);
+            }
+        }
+        for (int i = 0; i < n; i++) {
+            walls(bands.get(i), below[i], above[i]);
+        }
+    }
+
+    /** Builds the up and down faces at height z and returns the interface's node index. */
+    private NodeIndex face(double z, Geometry a, Geometry b) {
+        Geometry up;
+        Geometry down;
+        if (a == null) {
+            up = null;
+            down = b;
+        } else if (b == null) {
+            up = a;
+            down = null;
+        } else {
+            up = OverlayNG.overlay(a, b, OverlayNG.DIFFERENCE, ctx.precisionModel());
+            down = OverlayNG.overlay(b, a, OverlayNG.DIFFERENCE, ctx.precisionModel());
+        }
+        NodeIndex nodes = new NodeIndex(ctx.scale());
+        nodes.addAll(a);
+        nodes.addAll(b);
+        if (a != null && b != null) {
+            nodes.addAll(up);
+            nodes.addAll(down);
+        }
+        long iz = ctx.gridIndex(z);
+        triangulate(up, iz, true);
+        triangulate(down, iz, false);
+        return nodes;
+    }
+
+    private void triangulate(Geometry faces, long iz, boolean up) {
+        if (faces == null || faces.isEmpty()) {
+            return;
+        }
+        for (int i = 0; i < faces.getNumGeometries(); i++) {
+            Geometry part = faces.getGeometryN(i);
+            if (!(part instanceof Polygon p) || p.isEmpty()) {
+                continue;
+            }
+            for (Tri t : new PolygonTriangulator(p).getTriangles()) {
+                Coordinate p0 = t.getCoordinate(0);
+                Coordinate p1 = t.getCoordinate(1);
+                Coordinate p2 = t.getCoordinate(2);
+                double cross = (p1.x - p0.x) * (p2.y - p0.y) - (p1.y - p0.y) * (p2.x - p0.x);
+                int i0 = vertex(p0, iz);
+                int i1 = vertex(p1, iz);
+                int i2 = vertex(p2, iz);
+                if ((cross > 0) == up) {
+                    triangles.add(i0, i1, i2);
+                } else {
+                    triangles.add(i0, i2, i1);
+                }
+            }
+        }
+    }
+
+    private int vertex(Coordinate c, long iz) {
+        return vertices.index(Math.round(c.x * ctx.scale()), Math.round(c.y * ctx.scale()), iz);
+    }
+
+    private void walls(Band band, NodeIndex bottomNodes, NodeIndex topNodes) {
+        long iz0 = ctx.gridIndex(band.z0);
+        long iz1 = ctx.gridIndex(band.z1);
+        Geometry g = band.geometry;
+        for (int i = 0; i < g.getNumGeometries(); i++) {
+            Polygon p = (Polygon) g.getGeometryN(i);
+            wallRing(p.getExteriorRing(), false, iz0, iz1, bottomNodes, topNodes);
+            for (int h = 0; h < p.getNumInteriorRing(); h++) {
+                wallRing(p.getInteriorRingN(h), true, iz0, iz1, bottomNodes, topNodes);
+            }
+        }
+    }
+
+    private void wallRing(LineString ring, boolean hole, long iz0, long iz1, NodeIndex bottomNodes,
+            NodeIndex topNodes) {
+        Coordinate[] cs = ring.getCoordinates();
+        boolean ccw = Orientation.isCCWArea(cs);
+        boolean reverse = ccw == hole; // shells counter-clockwise, holes clockwise
+        int n = cs.length - 1;
+        List<Coordinate> bottom = new ArrayList<>();
+        List<Coordinate> top = new ArrayList<>();
+        for (int k = 0; k < n; k++) {
+            Coordinate p = reverse ? cs[n - k] : cs[k];
+            Coordinate q = reverse ? cs[n - k - 1] : cs[k + 1];
+            bottom.clear();
+            top.clear();
+            bottomNodes.split(p, q, bottom);
+            topNodes.split(p, q, top);
+            wallSplits += bottom.size() + top.size() - 4;
+            zipper(p, q, bottom, top, iz0, iz1);
+        }
+    }
+
+    /** Triangulates the strip between the bottom chain and the top chain of one wall segment p→q. */
+    private void zipper(Coordinate p, Coordinate q, List<Coordinate> bottom, List<Coordinate> top, long iz0,
+            long iz1) {
+        double dx = q.x - p.x;
+        double dy = q.y - p.y;
+        int i = 0;
+        int j = 0;
+        int mb = bottom.size() - 1;
+        int mt = top.size() - 1;
+        int b = vertex(bottom.get(0), iz0);
+        int t = vertex(top.get(0), iz1);
+        while (i < mb || j < mt) {
+            boolean advanceBottom;
+            if (i == mb) {
+                advanceBottom = false;
+            } else if (j == mt) {
+                advanceBottom = true;
+            } else {
+                advanceBottom = param(bottom.get(i + 1), p, dx, dy) <= param(top.get(j + 1), p, dx, dy);
+            }
+            if (advanceBottom) {
+                int nb = vertex(bottom.get(++i), iz0);
+                triangles.add(b, nb, t);
+                b = nb;
+            } else {
+                int nt = vertex(top.get(++j), iz1);
+                triangles.add(b, nt, t);
+                t = nt;
+            }
+        }
+    }
+
+    private static double param(Coordinate c, Coordinate p, double dx, double dy) {
+        return (c.x - p.x) * dx + (c.y - p.y) * dy;
+    }
+}
