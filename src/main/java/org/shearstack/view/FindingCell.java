@@ -26,8 +26,10 @@ final class FindingCell extends ListCell<Finding> {
         code.setStyle("-fx-font-weight: bold;");
         Label message = new Label(f.message());
         message.setWrapText(true);
-        message.setMaxWidth(260);
+        message.setMaxWidth(250);
+        code.setMaxWidth(200);
         setGraphic(new VBox(2, new HBox(6, tag, code), message));
+        setPrefWidth(0); // follow the list's width instead of widening it
         setText(null);
     }
 

@@ -66,4 +66,15 @@ final class ViewSession {
     ViewerWindow window() {
         return window;
     }
+
+    /** Closes the window and stops watching (for tests and for callers that embed the viewer). */
+    void close() {
+        FxToolkit.call(() -> {
+            window.stage().hide();
+            return null;
+        });
+        if (watcher != null) {
+            watcher.close();
+        }
+    }
 }

@@ -155,6 +155,19 @@ final class ViewerWindow {
         return Optional.ofNullable(model);
     }
 
+    /** Selects a finding in the list as a click would (null clears the selection). */
+    void selectFinding(Finding f) {
+        if (f == null) {
+            findings.getSelectionModel().clearSelection();
+        } else {
+            findings.getSelectionModel().select(f);
+        }
+    }
+
+    String detailsText() {
+        return details.getText();
+    }
+
     boolean bannerShown() {
         return banner.isVisible();
     }
@@ -203,7 +216,9 @@ final class ViewerWindow {
         List<String> all = new java.util.ArrayList<>(s.notes());
         all.addAll(next.notes());
         all.addAll(sectionNotes);
-        all.add(String.format(Locale.ROOT, "loaded in %.0f ms", loadNanos / 1e6));
+        if (loadNanos > 0) {
+            all.add(String.format(Locale.ROOT, "updated in %.0f ms", loadNanos / 1e6));
+        }
         status.setText(String.join("  ·  ", all));
     }
 
