@@ -1,0 +1,19 @@
+package org.shearstack.rules.geometry;
+
+import java.util.List;
+
+import org.shearstack.rules.Rule;
+
+/** The geometric (GEO-) rules: from sized rotor, printer and hardware to every dimension the parts need. */
+public final class GeometryRules {
+
+    private GeometryRules() {
+    }
+
+    public static List<Rule> rules() {
+        return List.of(new DiscLimitsRule(), new AxialStackRule(), new ChamberRule(), new BearingRule(),
+                new BearingSeatRule(), new HubKeyRule(), new ExhaustPortRule(), new SpacerRule(),
+                new CoverExhaustRule(), new FastenerRule(), new InletPortRule(), new HousingLayoutRule(),
+                new CoverRule(), new NozzleSlotRule(), new DriveTrainRule(), new BoltLengthRule());
+    }
+}
