@@ -19,7 +19,7 @@ public final class RuleCatalog {
         List<Rule> all = new ArrayList<>();
         all.addAll(PrinterRules.rules());
         // geometry (GEO-): all.addAll(org.shearstack.rules.geometry.GeometryRules.rules(profiles));
-        // flow sizing (SIZE-): all.addAll(org.shearstack.rules.sizing.SizingRules.rules());
+        all.addAll(org.shearstack.rules.sizing.SizingRules.rules());
         return List.copyOf(all);
     }
 
