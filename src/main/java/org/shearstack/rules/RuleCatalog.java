@@ -18,7 +18,8 @@ public final class RuleCatalog {
     public static List<Rule> rules(Profiles profiles) {
         List<Rule> all = new ArrayList<>();
         all.addAll(PrinterRules.rules());
-        // geometry (GEO-): all.addAll(org.shearstack.rules.geometry.GeometryRules.rules(profiles));
+        // geometry (GEO-) and flow sizing (SIZE-) go in together: geometry reads the sized rotor and nozzle
+        all.addAll(org.shearstack.rules.geometry.GeometryRules.rules(profiles));
         all.addAll(org.shearstack.rules.sizing.SizingRules.rules());
         return List.copyOf(all);
     }
