@@ -1,0 +1,90 @@
+package org.shearstack.rules.geometry;
+
+import static org.shearstack.rules.geometry.GeoKeys.*;
+
+import java.util.List;
+import java.util.Locale;
+
+import org.shearstack.rules.RuleInputs;
+import org.shearstack.rules.RuleOutputs;
+import org.shearstack.rules.geometry.FastenerCatalog.Fastener;
+import org.shearstack.rules.geometry.GlandCatalog.Gland;
+
+/**
+ * GEO-HOUSING-LAYOUT: the radial layout of the housing ring and covers, from the axis outward: chamber,
+ * wall, plenum (a vertical bore beside the chamber), wall, face O-ring groove around both, wall, bolt
+ * circle, boss. Bolt count from a largest bolt pitch of 10 screw diameters (from memory: usual spacing of
+ * flange bolts), at least four, even. Walls are whole line widths.
+ */
+public final class HousingLayoutRule extends GeoRule {
+
+    static final double MAX_PITCH_DIAMETERS = 10;
+
+    public HousingLayoutRule() {
+        super("GEO-HOUSING-LAYOUT", List.of(CHAMBER_DIAMETER, PORT_FEED_DIAMETER, PORT_PILOT_DIAMETER, LINE_WIDTH,
+                        SEAL, SEAL_SIZE, BOLT_CLEARANCE, BOLT_HEAD_DIAMETER, BOLT_ANCHOR_HOLE, BOLT_NUT_ACROSS_FLATS,
+                        FASTENER_SIZE),
+                List.of(WALL, PLENUM_DIAMETER, PLENUM_RADIUS, SEAL_KIND, GROOVE_DEPTH, GROOVE_WIDTH,
+                        GROOVE_INNER_DIAMETER, ORING_INNER_DIAMETER, CORD_LENGTH, BOLT_CIRCLE, BOLT_COUNT,
+                        HOUSING_OUTSIDE));
+    }
+
+    @Override
+    public void apply(RuleInputs in, RuleOutputs out) {
+        double lw = in.get(LINE_WIDTH);
+        double wall = Quanta.up(STRUCTURAL_WALL_MM, lw);
+        out.put(WALL, wall, "1.2 mm raised to whole line widths", PRINT_RULES);
+        double rc = in.get(CHAMBER_DIAMETER) / 2;
+        double plenum = Quanta.upToMultiple(Math.max(4.0, in.get(PORT_FEED_DIAMETER)), 0.1);
+        out.put(PLENUM_DIAMETER, plenum, "max(4 mm, feed hole), up to 0.1 mm", PRACTICE);
+        double rp = rc + wall + plenum / 2;
+        out.put(PLENUM_RADIUS, rp, "chamber radius + wall + plenum radius", "geometry");
+        double sealInner = rp + plenum / 2 + wall;
+
+        String seal = in.has(SEAL) ? in.text(SEAL).trim().toLowerCase(Locale.ROOT) : "none";
+        double outerOfSeal;
+        if (seal.startsWith("o-ring")) {
+            double cs = in.get(SEAL_SIZE);
+            Gland g = GlandCatalog.forCrossSection(cs).orElseThrow(() -> new IllegalArgumentException(
+                    "seal: no face-groove data for an O-ring of " + mm(cs) + "; listed cross-sections: "
+                            + GlandCatalog.all().stream().map(x -> String.format(Locale.ROOT, "%.2f", x.crossSectionMm()))
+                                    .toList()));
+            String src = "orings.co.uk axial housing table (standards.md §4.2)";
+            out.putText(SEAL_KIND, "o-ring", "face O-ring in a groove in each cover", src);
+            out.put(GROOVE_DEPTH, g.depthMm(), "groove depth h for cross-section " + mm(cs), src);
+            out.put(GROOVE_WIDTH, g.widthMm(), "groove width b for cross-section " + mm(cs), src);
+            out.put(GROOVE_INNER_DIAMETER, 2 * sealInner, "2 × (plenum outer edge + wall)", "geometry");
+            double grooveOuter = 2 * (sealInner + g.widthMm());
+            double ringId = grooveOuter - 2 * cs;
+            out.put(ORING_INNER_DIAMETER, ringId,
+                    "groove outer diameter − 2 × cross-section: under internal pressure the ring bears on the groove OD",
+                    "Canyon Components via standards.md §4.2 (0–3 % on the groove OD)");
+            out.put(CORD_LENGTH, Math.PI * (ringId + cs), "π × (inner diameter + cross-section)", "geometry");
+            outerOfSeal = sealInner + g.widthMm();
+        } else {
+            String kind = seal.startsWith("gasket") ? "gasket" : "none";
+            out.putText(SEAL_KIND, kind, kind.equals("gasket") ? "flat gasket land, no groove" : "no seal", "spec");
+            out.put(GROOVE_DEPTH, 0, "no groove", "spec");
+            out.put(GROOVE_WIDTH, 0, "no groove", "spec");
+            out.put(GROOVE_INNER_DIAMETER, 0, "no groove", "spec");
+            out.put(ORING_INNER_DIAMETER, 0, "no O-ring", "spec");
+            out.put(CORD_LENGTH, 0, "no O-ring", "spec");
+            outerOfSeal = sealInner - wall;
+        }
+        Fastener f = FastenerRule.fastener(in);
+        double holeR = Math.max(in.get(BOLT_CLEARANCE), in.get(BOLT_ANCHOR_HOLE)) / 2;
+        double nutR = in.get(BOLT_NUT_ACROSS_FLATS) / Math.sqrt(3);
+        double rb = Quanta.upToMultiple(outerOfSeal + wall + Math.max(holeR, nutR), 0.1);
+        out.put(BOLT_CIRCLE, 2 * rb, "2 × (seal outer edge + wall + largest hole or nut radius), up to 0.2 mm",
+                "geometry; " + PRINT_RULES);
+        int count = (int) Math.ceil(2 * Math.PI * rb / (MAX_PITCH_DIAMETERS * f.nominalMm()));
+        count = Math.max(4, count + (count % 2));
+        out.put(BOLT_COUNT, count, "bolt circle circumference / (10 × screw diameter), at least 4, even",
+                "from memory: flange bolt pitch within about 10 bolt diameters");
+        double boss = Math.max(Math.max(in.get(BOLT_HEAD_DIAMETER) / 2 + lw, holeR + wall), nutR + wall);
+        double outside = Math.max(2 * (rb + boss), 2 * (rp + in.get(PORT_PILOT_DIAMETER) / 2 + wall));
+        out.put(HOUSING_OUTSIDE, Quanta.upToMultiple(outside, 0.5),
+                "2 × (bolt circle radius + max(head radius + line width, hole or nut radius + wall)), up to 0.5 mm",
+                "geometry; " + PRINT_RULES);
+    }
+}
