@@ -83,4 +83,15 @@ class LayeredSolidTest {
         assertTrue(s.slabAt(1.5).isPresent());
         assertTrue(s.slabAt(2.5).isEmpty());
     }
+
+    @Test
+    void aPointTouchAcrossAnInterfaceIsReportedAsAPinchedVertex() {
+        // kernel-notes P9: a lower square's corner touches the upper square's corner at one point
+        Region low = Region.rectangle(ctx, 0, 0, 5, 5);
+        Region high = Region.rectangle(ctx, 5, 5, 10, 10);
+        MeshReport r = MeshCheck.validate(LayeredSolid.builder(ctx).slab(0, 1, low).slab(1, 2, high).build().toMesh(ctx));
+        assertTrue(r.isValidSolid(), r.summary());
+        assertEquals(1, r.pinchedVertices(), r.summary());
+        assertEquals(0, MeshCheck.validate(LayeredSolid.extrusion(low, 0, 1).toMesh(ctx)).pinchedVertices());
+    }
 }
