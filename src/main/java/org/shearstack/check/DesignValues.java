@@ -14,7 +14,7 @@ import java.util.Optional;
 public final class DesignValues {
 
     private final ResolvedDesign design;
-    private final List<String> missing = new ArrayList<>();
+    private final java.util.Set<String> missing = new java.util.LinkedHashSet<>();
 
     public DesignValues(ResolvedDesign design) {
         this.design = design;
