@@ -19,6 +19,7 @@ import picocli.CommandLine.Model.CommandSpec;
             DynoCommand.class,
             ViewCommand.class,
             SupplyCommand.class,
+            CheckCommand.class,
             // design, check, supply, family, dyno, view, calibrate, bench: add their classes here
             AutoComplete.GenerateCompletion.class,
         })
