@@ -41,6 +41,17 @@ public final class DynoCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
+    private final DesignLink.Source designs;
+
+    /** The command as the command line builds it. */
+    public DynoCommand() {
+        this(DesignLink.DEFAULT);
+    }
+
+    DynoCommand(DesignLink.Source designs) {
+        this.designs = designs;
+    }
+
     @Parameters(index = "0", paramLabel = "LOG.csv", description = "Speed log: time, speed, optional voltage and current.")
     Path log;
 
@@ -96,7 +107,7 @@ public final class DynoCommand implements Callable<Integer> {
                 err.println(log + ": cannot read: " + e.getMessage());
                 return EXIT_BAD_INPUT;
             }
-            DesignLink.Data d = DesignLink.load(design, inertiaKgM2, extraInertiaKgM2);
+            DesignLink.Data d = DesignLink.load(designs, design, inertiaKgM2, extraInertiaKgM2);
             DynoInputs in = new DynoInputs(d.inertiaKgM2(),
                     Optional.ofNullable(runUp).map(r -> range("--run-up", r)),
                     Optional.ofNullable(coastDown).map(r -> range("--coast-down", r)),
