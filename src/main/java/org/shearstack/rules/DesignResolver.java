@@ -38,6 +38,7 @@ public final class DesignResolver {
         Optional<PrinterProfile> printer = pick(spec, "printer", profiles.printers(), Profiles::readPrinter, problems);
         Optional<FilamentProfile> filament = pick(spec, "filament", profiles.filaments(), Profiles::readFilament,
                 problems);
+        HardwareNames.check(spec, profiles.hardware(), problems);
         if (!problems.isEmpty()) {
             throw new BadInputException(problems);
         }
