@@ -65,15 +65,22 @@ public final class CalibrateCommand implements Callable<Integer> {
             description = "Calibration file to write (default: ${DEFAULT-VALUE}).")
     Path output;
 
+    @picocli.CommandLine.Mixin
+    ProfileOptions profileOptions;
+
     private final DesignLink.Source designs;
 
-    /** The command as the command line builds it. */
+    /** The command as the command line builds it: designs are resolved from their spec. */
     public CalibrateCommand() {
-        this(DesignLink.DEFAULT);
+        this(null);
     }
 
     CalibrateCommand(DesignLink.Source designs) {
         this.designs = designs;
+    }
+
+    private DesignLink.Source designs() {
+        return designs != null ? designs : new SpecDesigns(profileOptions.load());
     }
 
     @Override
@@ -83,7 +90,7 @@ public final class CalibrateCommand implements Callable<Integer> {
         List<DynoResult> runs = new ArrayList<>();
         TurbineModel model;
         try {
-            DesignLink.Data d = DesignLink.load(designs, design, inertiaKgM2, extraInertiaKgM2);
+            DesignLink.Data d = DesignLink.load(design == null ? null : designs(), design, inertiaKgM2, extraInertiaKgM2);
             model = d.model().orElseThrow(() -> new IllegalArgumentException("--design " + design
                     + ": the design has no performance model to calibrate"));
             BenchLogOptions opts = new BenchLogOptions(

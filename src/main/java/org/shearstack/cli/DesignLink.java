@@ -31,12 +31,6 @@ final class DesignLink {
         Design load(Path design);
     }
 
-    /** The lookup used by the command line. */
-    static final Source DEFAULT = design -> {
-        throw new IllegalArgumentException("--design " + design + ": reading a design's rotor inertia and"
-                + " performance model is not available in this build yet; give --inertia (kg*m^2)");
-    };
-
     /** Inertia, where it came from, an optional prediction and the model. */
     record Data(double inertiaKgM2, String inertiaSource, Optional<Prediction> prediction,
             Optional<TurbineModel> model) {
@@ -57,8 +51,8 @@ final class DesignLink {
                     + " (kg*m^2, e.g. 9.7e-5 or '97 kg*mm^2')");
         }
         if (!(d.get().rotorInertiaKgM2() > 0)) {
-            throw new IllegalArgumentException("--design " + design + ": the design does not give the rotor inertia;"
-                    + " give --inertia (kg*m^2)");
+            throw new IllegalArgumentException("--design " + design + ": " + d.get().inertiaSource()
+                    + "; give --inertia (kg*m^2)");
         }
         return new Data(d.get().rotorInertiaKgM2() + extraKgM2, d.get().inertiaSource() + extra, prediction, model);
     }

@@ -65,7 +65,7 @@ class DynoCommandTest {
     void missingInertiaIsBadInput(@TempDir Path dir) {
         Run r = run(EXAMPLE.toString(), "-o", dir.toString());
         assertEquals(2, r.exit());
-        assertEquals(EXAMPLE + ": the rotor inertia is unknown: give --design DIR|SPEC or --inertia (kg*m^2, e.g."
+        assertEquals("the rotor inertia is unknown: give --design DIR|SPEC or --inertia (kg*m^2, e.g."
                 + " 9.7e-5 or '97 kg*mm^2')", r.err().strip());
         assertFalse(Files.exists(dir.resolve("dyno.json")), "nothing written");
     }
