@@ -7,11 +7,12 @@ import java.util.Map;
 import org.shearstack.geom.GeometryContext;
 import org.shearstack.geom.MassProperties;
 import org.shearstack.part.Dims;
+import org.shearstack.part.HubShaft;
 
 /**
  * Moment of inertia about the spin axis of everything the kit puts on the shaft: every rotating printed part
  * (from its mesh, {@link MassProperties}) times its number of copies, plus a metal shaft when the design uses
- * one (solid steel cylinder of the bearing bore over the shaft length, 7850 kg/m³, common practice). The
+ * one (the kit's shaft model in steel, 7850 kg/m³, common practice). The
  * generator's own rotor is not in the kit and must be added by the user.
  */
 public final class RotatingInertia {
@@ -67,10 +68,30 @@ public final class RotatingInertia {
         }
         double shaft = 0;
         if (d.metalShaft()) {
-            double r = d.bearingBore() / 2000.0;
-            double len = (d.shaftZ1() - d.shaftZ0()) / 1000.0;
-            shaft = 0.5 * STEEL_DENSITY_KG_PER_M3 * Math.PI * r * r * len * r * r;
+            shaft = MassProperties.of(HubShaft.metalShaftModel(d, ctx).toMesh(ctx), STEEL_DENSITY_KG_PER_M3)
+                    .inertiaZAxisKgM2();
             total += shaft;
+        }
+        return new Result(total, shares, shaft);
+    }
+
+    /** The same from a built kit: its rotating printed parts at the filament density, a metal shaft as steel. */
+    public static Result of(Kit kit, double filamentDensityKgPerM3) {
+        List<Share> shares = new ArrayList<>();
+        double total = 0;
+        double shaft = 0;
+        for (KitPart p : kit.parts()) {
+            if (!p.rotating() || p.count() == 0) {
+                continue;
+            }
+            double rho = p.printed() ? filamentDensityKgPerM3 : STEEL_DENSITY_KG_PER_M3;
+            double each = MassProperties.of(p.mesh(), rho).inertiaZAxisKgM2();
+            if (p.printed()) {
+                shares.add(new Share(p.name(), p.count(), each));
+            } else {
+                shaft += p.count() * each;
+            }
+            total += p.count() * each;
         }
         return new Result(total, shares, shaft);
     }
