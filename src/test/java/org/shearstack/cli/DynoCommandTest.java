@@ -35,7 +35,8 @@ class DynoCommandTest {
 
     @Test
     void analysesTheExampleLog(@TempDir Path dir) throws Exception {
-        Run r = run(EXAMPLE.toString(), "--inertia", "120 kg*mm^2", "-o", dir.toString());
+        // the README's command line
+        Run r = run(EXAMPLE.toString(), "--inertia", "1.2e-4", "-o", dir.toString());
         assertEquals(0, r.exit(), r.err());
         JsonNode j = new ObjectMapper().readTree(dir.resolve("dyno.json").toFile());
         assertEquals("shearstack-dyno/1", j.get("format").asText());
