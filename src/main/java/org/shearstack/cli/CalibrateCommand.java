@@ -15,6 +15,7 @@ import org.shearstack.io.benchlog.BenchLogReader;
 import org.shearstack.io.benchlog.LogTimeUnit;
 import org.shearstack.io.benchlog.SpeedUnit;
 import org.shearstack.io.calibration.CalibrationFile;
+import org.shearstack.io.calibration.CalibrationHtml;
 import org.shearstack.physics.calibration.BenchCalibrator;
 import org.shearstack.physics.calibration.CalibrationFit;
 import org.shearstack.physics.calibration.FittedCoefficient;
@@ -119,14 +120,19 @@ public final class CalibrateCommand implements Callable<Integer> {
         }
         CalibrationFit fit = BenchCalibrator.fit(model, runs);
         String text = CalibrationFile.render(fit, design.toString(), logs.stream().map(Path::toString).toList());
+        String name = output.getFileName().toString();
+        Path page = output.resolveSibling((name.contains(".") ? name.substring(0, name.lastIndexOf('.')) : name)
+                + ".html");
         try {
             CalibrationFile.write(output, text);
+            CalibrationFile.write(page, CalibrationHtml.render(fit, design.toString(),
+                    logs.stream().map(Path::toString).toList()));
         } catch (IOException e) {
             err.println("cannot write " + output + ": " + e.getMessage());
             return ExitCode.INTERNAL_ERROR.code();
         }
         print(out, fit);
-        out.println("wrote " + output + " (use it from a spec: calibration: " + output.getFileName() + ")");
+        out.println("wrote " + output + " (use it from a spec: calibration: " + output.getFileName() + ") and " + page);
         return ExitCode.OK.code();
     }
 

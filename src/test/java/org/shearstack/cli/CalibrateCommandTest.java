@@ -48,6 +48,8 @@ class CalibrateCommandTest {
         assertTrue(c.fittedKeys().contains("bearing-speed-factor"));
         assertTrue(r.out().contains("no-load speed: measured "), r.out());
         assertTrue(r.out().contains("wrote " + file), r.out());
+        String html = Files.readString(dir.resolve("my-bench.html"));
+        assertTrue(html.contains("model after") && html.contains("<svg "), "before/after chart");
     }
 
     @Test
