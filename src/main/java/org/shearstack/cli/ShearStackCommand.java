@@ -17,6 +17,7 @@ import picocli.CommandLine.Model.CommandSpec;
             ExplainCommand.class,
             ProfilesCommand.class,
             DynoCommand.class,
+            CalibrateCommand.class,
             ViewCommand.class,
             SupplyCommand.class,
             CheckCommand.class,
