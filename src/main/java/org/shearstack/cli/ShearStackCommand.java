@@ -16,6 +16,7 @@ import picocli.CommandLine.Model.CommandSpec;
         subcommands = {
             ExplainCommand.class,
             ProfilesCommand.class,
+            DynoCommand.class,
             ViewCommand.class,
             // design, check, supply, family, dyno, view, calibrate, bench: add their classes here
             AutoComplete.GenerateCompletion.class,
