@@ -68,11 +68,18 @@ final class PerformanceSection {
                 values(p.map().pessimistic(), f), rpm(p.map().optimistic()), values(p.map().optimistic(), f)));
         if (generatorCurve && p.generator().isPresent()) {
             var g = p.generator().get();
-            double[] x = g.points().stream().mapToDouble(s -> Num.rpm(s.speedRadPerS())).toArray();
-            double[] y = g.points().stream().mapToDouble(s -> title.startsWith("Shaft torque") ? s.torqueNm() * 1000
-                    : s.electricalPowerW()).toArray();
+            double cap = 1.25 * Math.max(max(values(p.map().optimistic(), f)), max(values(est, f)));
+            List<PerformanceData.GeneratorSample> shown = new ArrayList<>();
+            for (PerformanceData.GeneratorSample s : g.points()) {
+                shown.add(s);
+                if (genValue(s, title) > cap) {
+                    break;
+                }
+            }
+            double[] x = shown.stream().mapToDouble(s -> Num.rpm(s.speedRadPerS())).toArray();
+            double[] y = shown.stream().mapToDouble(s -> genValue(s, title)).toArray();
             series.add(new SvgPlot.Series(title.startsWith("Shaft torque")
-                    ? "generator load torque" : "generator electrical power", "gen", x, y));
+                    ? "generator load torque" : "generator, electric", "gen", x, y));
         }
         OperatingPoint op = p.operatingPoint();
         OperatingPoint last = est.points().get(est.points().size() - 1);
@@ -80,6 +87,18 @@ final class PerformanceSection {
                 new SvgPlot.Mark("operating point", op.speedRpm(), f.applyAsDouble(op)),
                 new SvgPlot.Mark("runaway", Num.rpm(est.runawaySpeedRadPerS()), f.applyAsDouble(last)));
         return SvgPlot.of(title, "speed (rpm)", yLabel, series, bands, marks);
+    }
+
+    private static double genValue(PerformanceData.GeneratorSample s, String title) {
+        return title.startsWith("Shaft torque") ? s.torqueNm() * 1000 : s.electricalPowerW();
+    }
+
+    private static double max(double[] v) {
+        double m = 0;
+        for (double x : v) {
+            m = Double.isFinite(x) ? Math.max(m, x) : m;
+        }
+        return m;
     }
 
     private static double[] rpm(PerformanceCurve c) {

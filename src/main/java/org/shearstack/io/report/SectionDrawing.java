@@ -83,7 +83,7 @@ public final class SectionDrawing {
         double w = PAD + PLAN_PX + 2 * PAD + secW + PAD + 60;
         double h = Math.max(planH, secH) + 2 * PAD + 34;
         StringBuilder b = new StringBuilder(4096);
-        b.append("<svg xmlns=\"http://www.w3.org/2000/svg\" class=\"drawing\" width=\"").append(px(w))
+        b.append("<svg class=\"drawing\" width=\"").append(px(w))
                 .append("\" height=\"").append(px(h)).append("\" viewBox=\"0 0 ").append(px(w)).append(' ')
                 .append(px(h)).append("\" role=\"img\" aria-label=\"").append(Xml.esc(partName))
                 .append(": plan and section\">\n");

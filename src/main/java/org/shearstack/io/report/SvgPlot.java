@@ -14,7 +14,7 @@ public final class SvgPlot {
     public static final int HEIGHT = 300;
     static final int LEFT = 70;
     static final int RIGHT = 18;
-    static final int TOP = 30;
+    static final int TOP = 44;
     static final int BOTTOM = 48;
 
     /** A polyline. {@code style} is a CSS class: "est", "alt", "gen". */
@@ -83,7 +83,7 @@ public final class SvgPlot {
     /** The SVG element. */
     public String svg() {
         StringBuilder b = new StringBuilder(8192);
-        b.append("<svg xmlns=\"http://www.w3.org/2000/svg\" class=\"plot\" width=\"").append(WIDTH)
+        b.append("<svg class=\"plot\" width=\"").append(WIDTH)
                 .append("\" height=\"").append(HEIGHT).append("\" viewBox=\"0 0 ").append(WIDTH).append(' ')
                 .append(HEIGHT).append("\" role=\"img\" aria-label=\"").append(Xml.esc(title))
                 .append("\" data-x-min=\"").append(Num.sig(xAxis.lo, 12)).append("\" data-x-max=\"")
@@ -114,7 +114,7 @@ public final class SvgPlot {
                     .append("\" x2=\"").append(px(cx)).append("\" y2=\"").append(HEIGHT - BOTTOM).append("\"/>")
                     .append("<circle cx=\"").append(px(cx)).append("\" cy=\"").append(px(cy)).append("\" r=\"4.5\"/>")
                     .append("<text x=\"").append(px(Math.min(cx + 7, WIDTH - RIGHT - 4))).append("\" y=\"")
-                    .append(px(Math.max(cy - 7, TOP + 10))).append("\"")
+                    .append(px(Math.max(cy - 7, TOP + 12))).append("\"")
                     .append(cx > WIDTH * 0.7 ? " text-anchor=\"end\"" : "").append('>')
                     .append(Xml.esc(m.name())).append("</text></g>\n");
         }
@@ -154,9 +154,8 @@ public final class SvgPlot {
         b.append("</g>\n");
     }
 
+    /** One row of legend entries between the title and the plot area. */
     private void legend(StringBuilder b) {
-        int x = WIDTH - RIGHT - 150;
-        int y = TOP + 6;
         List<String[]> entries = new ArrayList<>();
         for (Series s : series) {
             entries.add(new String[] {"line " + s.style(), s.name()});
@@ -167,18 +166,20 @@ public final class SvgPlot {
         if (entries.size() < 2) {
             return;
         }
+        double x = LEFT;
+        int y = 34;
         b.append("<g class=\"legend\">");
         for (String[] e : entries) {
             if (e[0].equals("band")) {
-                b.append("<rect class=\"band\" x=\"").append(x).append("\" y=\"").append(y - 6)
+                b.append("<rect class=\"band\" x=\"").append(px(x)).append("\" y=\"").append(y - 8)
                         .append("\" width=\"18\" height=\"9\"/>");
             } else {
-                b.append("<line class=\"").append(e[0]).append("\" x1=\"").append(x).append("\" y1=\"").append(y - 2)
-                        .append("\" x2=\"").append(x + 18).append("\" y2=\"").append(y - 2).append("\"/>");
+                b.append("<line class=\"").append(e[0]).append("\" x1=\"").append(px(x)).append("\" y1=\"").append(y - 4)
+                        .append("\" x2=\"").append(px(x + 18)).append("\" y2=\"").append(y - 4).append("\"/>");
             }
-            b.append("<text x=\"").append(x + 24).append("\" y=\"").append(y + 2).append("\">").append(Xml.esc(e[1]))
+            b.append("<text x=\"").append(px(x + 23)).append("\" y=\"").append(y).append("\">").append(Xml.esc(e[1]))
                     .append("</text>");
-            y += 15;
+            x += 23 + 6.4 * e[1].length() + 16;
         }
         b.append("</g>\n");
     }
@@ -263,6 +264,9 @@ public final class SvgPlot {
         }
 
         String label(double v) {
+            if (Math.abs(v) < step * 1e-6) {
+                return "0";
+            }
             int decimals = 0;
             if (step < 1) {
                 double e = Math.floor(Math.log10(step));
@@ -271,7 +275,7 @@ public final class SvgPlot {
             } else if (Math.abs(step - Math.rint(step)) > 1e-9) {
                 decimals = 1;
             }
-            return Num.fixed(Math.abs(v) < step * 1e-6 ? 0 : v, decimals);
+            return Num.fixed(v, decimals);
         }
     }
 }
