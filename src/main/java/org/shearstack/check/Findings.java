@@ -32,7 +32,11 @@ public final class Findings {
             return "0";
         }
         int digits = Math.max(0, significant - 1 - (int) Math.floor(Math.log10(Math.abs(v))));
-        return String.format(Locale.ROOT, "%." + digits + "f", v);
+        String s = String.format(Locale.ROOT, "%." + digits + "f", v);
+        if (s.indexOf('.') >= 0) {
+            s = s.replaceAll("0+$", "").replaceAll("\\.$", "");
+        }
+        return s;
     }
 
     /** rad/s to rpm, rounded to a whole number for messages. */

@@ -32,12 +32,11 @@ import picocli.CommandLine.Spec;
  * {@code shearstack dyno LOG.csv --design DIR|SPEC [--extra-inertia ...] [-o DIR]}: torque and power from a
  * tachometer log by the inertia method; writes dyno.html, dyno.csv and dyno.json.
  */
-@Command(name = "dyno", mixinStandardHelpOptions = true,
+@Command(name = "dyno", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
         description = {"Torque and power from a run-up / coast-down speed log, without a torque sensor.",
             "Writes dyno.html, dyno.csv and dyno.json."})
 public final class DynoCommand implements Callable<Integer> {
-    /** Exit code for bad input (unreadable log, missing inertia, bad option). */
-    public static final int EXIT_BAD_INPUT = 2;
+    private static final int EXIT_BAD_INPUT = ExitCode.BAD_INPUT.code();
 
     @Spec
     CommandSpec spec;
@@ -90,7 +89,13 @@ public final class DynoCommand implements Callable<Integer> {
                     Optional.ofNullable(speedUnit).map(u -> SpeedUnit.fromSymbol(u).orElseThrow(
                             () -> new IllegalArgumentException("--speed-unit: expected rpm, Hz or rad/s, found '" + u
                                     + "'"))));
-            BenchLog bench = BenchLogReader.read(log, opts);
+            BenchLog bench;
+            try {
+                bench = BenchLogReader.read(log, opts);
+            } catch (IOException e) {
+                err.println(log + ": cannot read: " + e.getMessage());
+                return EXIT_BAD_INPUT;
+            }
             DesignLink.Data d = DesignLink.load(design, inertiaKgM2, extraInertiaKgM2);
             DynoInputs in = new DynoInputs(d.inertiaKgM2(),
                     Optional.ofNullable(runUp).map(r -> range("--run-up", r)),
@@ -101,7 +106,7 @@ public final class DynoCommand implements Callable<Integer> {
             Path folder = output != null ? output : Path.of("dyno-" + stem(log));
             DynoReportWriter.write(new DynoReport(r, log.toString(), bench.columns(), d.inertiaSource()), folder);
             print(out, r, folder);
-            return 0;
+            return ExitCode.OK.code();
         } catch (BenchLogException e) {
             err.println(e.getMessage());
             return EXIT_BAD_INPUT;
@@ -109,8 +114,8 @@ public final class DynoCommand implements Callable<Integer> {
             err.println(log + ": " + e.getMessage());
             return EXIT_BAD_INPUT;
         } catch (IOException e) {
-            err.println("cannot read or write: " + e.getMessage());
-            return EXIT_BAD_INPUT;
+            err.println("cannot write the results: " + e.getMessage());
+            return ExitCode.INTERNAL_ERROR.code();
         }
     }
 

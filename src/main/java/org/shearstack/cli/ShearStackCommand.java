@@ -17,6 +17,8 @@ import picocli.CommandLine.Model.CommandSpec;
             DesignCommand.class,
             ExplainCommand.class,
             ProfilesCommand.class,
+            DynoCommand.class,
+            ViewCommand.class,
             // design, check, supply, family, dyno, view, calibrate, bench: add their classes here
             AutoComplete.GenerateCompletion.class,
         })

@@ -122,6 +122,7 @@ public final class Profiles {
             if (doc.isEmpty()) {
                 continue;
             }
+            doc.get().requireKind(kind.substring(0, kind.length() - 1));
             T value = reader.read(doc.get(), f.label(), problems);
             String name = doc.get().optionalText("name").orElse("");
             if (!name.equals(f.stem())) {

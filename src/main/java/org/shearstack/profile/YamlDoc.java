@@ -88,6 +88,14 @@ final class YamlDoc {
         return map.getStartMark().getLine() + 1;
     }
 
+    /** Reports a missing or different {@code kind:} (a printer file in the filaments folder, say). */
+    void requireKind(String kind) {
+        String found = optionalText("kind").orElse("");
+        if (!found.equals(kind)) {
+            problem("kind", "kind: " + kind, found.isEmpty() ? "no kind" : "\"" + found + "\"");
+        }
+    }
+
     /** Reports keys not in the allowed set, with the nearest allowed one. */
     void allowOnly(Set<String> allowed) {
         for (Map.Entry<String, NodeTuple> e : byKey.entrySet()) {

@@ -103,6 +103,15 @@ final class FxToolkit {
         }
     }
 
+    /** Ends the toolkit (for the command line, after its window has closed). */
+    static void shutdown() {
+        synchronized (LOCK) {
+            if (started) {
+                Platform.exit();
+            }
+        }
+    }
+
     private static void await(CountDownLatch latch) {
         try {
             if (!latch.await(30, TimeUnit.SECONDS)) {

@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import javafx.scene.AmbientLight;
+import javafx.scene.DepthTest;
 import javafx.scene.Group;
 import javafx.scene.PerspectiveCamera;
 import javafx.scene.PointLight;
@@ -61,6 +62,7 @@ final class ModelView {
      * @throws IllegalArgumentException naming the part when a mesh cannot be shown
      */
     static ModelView build(ViewScene scene) {
+        FxToolkit.ensureStarted(); // Prism reads its settings once, when the first node is made
         Map<String, Mesh> placed = new LinkedHashMap<>();
         Box3 all = Box3.EMPTY;
         for (ViewPart p : scene.parts()) {
@@ -98,6 +100,7 @@ final class ModelView {
         marker.setMaterial(markerMaterial);
         marker.setRadius(Math.max(all.diagonal(), 1) * 0.018);
         marker.setVisible(false);
+        marker.setDepthTest(DepthTest.DISABLE); // drawn last and over everything: visible inside a part too
         modelGroup.getChildren().add(marker);
         rig.getTransforms().addAll(rigTarget, rigYaw, rigPitch, rigBack);
         camera.setFieldOfView(Orbit.FIELD_OF_VIEW_DEGREES);
@@ -113,6 +116,10 @@ final class ModelView {
 
     PerspectiveCamera camera() {
         return camera;
+    }
+
+    double[] originMm() {
+        return originMm.clone();
     }
 
     ViewScene scene() {

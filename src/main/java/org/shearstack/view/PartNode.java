@@ -30,6 +30,7 @@ final class PartNode {
     private SectionResult section;
     private Group sectionGroup;
     private Rgb colour;
+    private boolean dimmed;
 
     PartNode(ViewPart part, Mesh placed, double[] originMm, FxMeshArrays arrays) {
         this.part = part;
@@ -57,9 +58,14 @@ final class PartNode {
         return colour;
     }
 
-    void setColour(Rgb rgb, boolean dimmed) {
+    boolean dimmed() {
+        return dimmed;
+    }
+
+    void setColour(Rgb rgb, boolean dim) {
         colour = rgb;
-        Rgb shown = dimmed ? rgb.mix(Rgb.parse("#d9d6cf"), 0.7) : rgb;
+        dimmed = dim;
+        Rgb shown = dim ? rgb.mix(Rgb.parse("#d9d6cf"), 0.7) : rgb;
         material.setDiffuseColor(fx(shown));
         cutMaterial.setDiffuseColor(fx(shown.mix(CUT_TINT, 0.45)));
     }

@@ -33,7 +33,7 @@ public final class SampleAssembly {
         List<Finding> findings = List.of(
                 new Finding("SAMPLE-WALL", Severity.CAUTION, "Housing wall near the inlet is 1.6 mm, two line widths.",
                         1.6, 1.2, "mm", 1.33, "housing ring", "inlet boss", "sample", "Widen the boss to 2 mm.",
-                        new Finding.Location(0, -50, 15)),
+                        new Finding.Location(0, -58, 15)),
                 new Finding("SAMPLE-GAP", Severity.OK, "Disc gap 1.6 mm prints as separate walls.",
                         1.6, 0.8, "mm", 2.0, "disc pack", "gap between discs", "sample", "",
                         new Finding.Location(40, 0, 8)),

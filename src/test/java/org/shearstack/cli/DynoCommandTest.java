@@ -12,7 +12,6 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import picocli.CommandLine;
 
 /**
  * Runs the dyno command on the invented example log examples/bench-run-demo.csv, whose comment lines state
@@ -27,10 +26,10 @@ class DynoCommandTest {
     private static Run run(String... args) {
         StringWriter out = new StringWriter();
         StringWriter err = new StringWriter();
-        CommandLine cl = new CommandLine(new DynoCommand());
-        cl.setOut(new PrintWriter(out));
-        cl.setErr(new PrintWriter(err));
-        int code = cl.execute(args);
+        String[] all = new String[args.length + 1];
+        all[0] = "dyno";
+        System.arraycopy(args, 0, all, 1, args.length);
+        int code = Main.run(all, new PrintWriter(out, true), new PrintWriter(err, true));
         return new Run(code, out.toString(), err.toString());
     }
 

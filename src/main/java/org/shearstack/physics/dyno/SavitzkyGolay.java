@@ -37,13 +37,18 @@ public final class SavitzkyGolay {
      * denominator).
      */
     public static double[] weights(double[] offsets, int order, int derivative) {
-        int n = offsets.length;
         if (order < 0 || order > 6) {
             throw new IllegalArgumentException("polynomial order must be 0..6, found " + order);
         }
         if (derivative < 0 || derivative > order) {
             throw new IllegalArgumentException("derivative must be 0.." + order + ", found " + derivative);
         }
+        return weightsUpTo(offsets, order, derivative)[derivative];
+    }
+
+    /** Weights for derivatives 0..maxDerivative from one least-squares system. */
+    private static double[][] weightsUpTo(double[] offsets, int order, int maxDerivative) {
+        int n = offsets.length;
         if (n < order + 1) {
             throw new IllegalArgumentException("a window of " + n + " points cannot fit order " + order);
         }
@@ -55,7 +60,7 @@ public final class SavitzkyGolay {
             scale = 1;
         }
         int m = order + 1;
-        // Vandermonde on scaled offsets; solve the normal equations for the row 'derivative' of (X'X)^-1 X'.
+        // Vandermonde on scaled offsets; row d of (X'X)^-1 X' gives the d-th coefficient of the fit.
         double[][] gram = new double[m][m];
         double[][] powers = new double[n][m];
         for (int j = 0; j < n; j++) {
@@ -75,26 +80,26 @@ public final class SavitzkyGolay {
                 gram[a][b] = s;
             }
         }
-        double[] unit = new double[m];
-        unit[derivative] = 1;
-        double[] row = Linear.solve(gram, unit);
-        if (row == null) {
-            throw new IllegalArgumentException("sample times do not determine a polynomial of order " + order);
-        } // symmetric: row of the inverse = solution with a unit vector
+        double[][] out = new double[maxDerivative + 1][n];
         double factorial = 1;
-        for (int k = 2; k <= derivative; k++) {
-            factorial *= k;
-        }
-        double denom = factorial / Math.pow(scale, derivative);
-        double[] w = new double[n];
-        for (int j = 0; j < n; j++) {
-            double s = 0;
-            for (int k = 0; k < m; k++) {
-                s += row[k] * powers[j][k];
+        for (int d = 0; d <= maxDerivative; d++) {
+            factorial *= Math.max(1, d);
+            double[] unit = new double[m];
+            unit[d] = 1;
+            double[] row = Linear.solve(gram, unit); // symmetric: a row of the inverse
+            if (row == null) {
+                throw new IllegalArgumentException("sample times do not determine a polynomial of order " + order);
             }
-            w[j] = s * denom;
+            double denom = factorial / Math.pow(scale, d);
+            for (int j = 0; j < n; j++) {
+                double s = 0;
+                for (int k = 0; k < m; k++) {
+                    s += row[k] * powers[j][k];
+                }
+                out[d][j] = s * denom;
+            }
         }
-        return w;
+        return out;
     }
 
     /**
@@ -106,6 +111,9 @@ public final class SavitzkyGolay {
         int n = y.length;
         if (timeS.length != n) {
             throw new IllegalArgumentException("time and value arrays differ in length: " + timeS.length + " vs " + n);
+        }
+        if (order < 1 || order > 6) {
+            throw new IllegalArgumentException("smoothing with a slope needs polynomial order 1..6, found " + order);
         }
         if (window > n) {
             throw new IllegalArgumentException("window of " + window + " points is longer than the " + n + " samples");
@@ -119,8 +127,9 @@ public final class SavitzkyGolay {
             for (int j = 0; j < window; j++) {
                 offsets[j] = timeS[start + j] - timeS[i];
             }
-            double[] w0 = weights(offsets, order, 0);
-            double[] w1 = weights(offsets, order, 1);
+            double[][] w = weightsUpTo(offsets, order, 1);
+            double[] w0 = w[0];
+            double[] w1 = w[1];
             double v = 0;
             double d = 0;
             for (int j = 0; j < window; j++) {

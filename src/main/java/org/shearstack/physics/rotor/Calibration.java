@@ -33,24 +33,24 @@ public record Calibration(AdmissionReading admission, double endFaceScale, doubl
     /**
      * Nominal estimate: rim-struck flow capped at the smaller of jet and rim swirl; Daily &amp; Nece and rim
      * friction as correlated; μ = 0.0015 for deep-groove ball bearings (RoyMech; Koyo catalogue table 4-1
-     * gives 0.0010–0.0015); f₀ = 1.5 for a greased deep-groove bearing (Palmgren, from memory); 1 mN·m seal drag
+     * gives 0.0010–0.0015); f₀ = 1.0 for a greased deep-groove bearing (Palmgren; 0.7–2 from memory); 1 mN·m seal drag
      * per sealed bearing (engineering judgment, from memory; calibrate by coast-down).
      */
     public static Calibration nominal() {
-        return new Calibration(AdmissionReading.RIM_STRUCK_CAPPED, 1.0, 1.0, 0.0015, 1.5, 1.0e-3, 1.0, "nominal");
+        return new Calibration(AdmissionReading.RIM_STRUCK_CAPPED, 1.0, 1.0, 0.0015, 1.0, 1.0e-3, 1.0, "nominal");
     }
 
     /** Optimistic reading around a base: capped admission, low parasitic coefficients, discharge +5 %. */
     public Calibration optimistic() {
         return new Calibration(AdmissionReading.RIM_STRUCK_CAPPED, endFaceScale * 0.7, rimScale * 0.7,
-                bearingFrictionCoefficient * (0.0010 / 0.0015), bearingSpeedFactor * 0.67,
+                bearingFrictionCoefficient * (0.0010 / 0.0015), bearingSpeedFactor * 0.7,
                 sealTorquePerBearingNm * 0.5, dischargeScale * 1.05, "optimistic");
     }
 
     /** Pessimistic reading around a base: rim-struck flow does no work, high parasitic coefficients, discharge −10 %. */
     public Calibration pessimistic() {
         return new Calibration(AdmissionReading.JET_FRACTION_ONLY, endFaceScale * 1.5, rimScale * 1.5,
-                bearingFrictionCoefficient * 2.0, bearingSpeedFactor * 1.5, sealTorquePerBearingNm * 2.0,
+                bearingFrictionCoefficient * 2.0, bearingSpeedFactor * 2.0, sealTorquePerBearingNm * 2.0,
                 dischargeScale * 0.9, "pessimistic");
     }
 }

@@ -4,6 +4,7 @@ import org.hipparchus.analysis.solvers.AllowedSolution;
 import org.hipparchus.analysis.solvers.BracketingNthOrderBrentSolver;
 import org.shearstack.physics.gas.Expansion;
 import org.shearstack.physics.gas.Gas;
+import org.shearstack.physics.gas.JetState;
 import org.shearstack.physics.gas.Nozzle;
 import org.shearstack.physics.supply.SeriesFlow;
 import org.shearstack.physics.supply.SeriesSolver;
@@ -21,6 +22,8 @@ final class CoupledSolver {
     private final TurbineModel model;
     private final Nozzle nozzle;
     private final GapFluid fluid;
+    private final double chokedPlenumPa;
+    private final double chokingBackPa;
 
     CoupledSolver(TurbineModel model) {
         this.model = model;
@@ -28,6 +31,8 @@ final class CoupledSolver {
         double cd = Math.min(1.0, n.dischargeCoefficient() * model.calibration().dischargeScale());
         this.nozzle = new Nozzle(n.kind(), n.throatAreaM2(), n.exitAreaM2(), cd, n.velocityCoefficient());
         this.fluid = GapFluid.compressible(model.gas());
+        this.chokedPlenumPa = SeriesSolver.chokedPlenumPressurePa(model.gas(), model.supply(), nozzle);
+        this.chokingBackPa = SeriesSolver.chokingBackPressurePa(model.gas(), nozzle, chokedPlenumPa);
     }
 
     /** One evaluation of the chain at a trial rim pressure. */
@@ -50,7 +55,7 @@ final class CoupledSolver {
         if (bottom.residual() >= 0.0) {
             p2 = lo;
         } else {
-            BracketingNthOrderBrentSolver solver = new BracketingNthOrderBrentSolver(1e-12, ps * 1e-10, 1e-9, 5);
+            BracketingNthOrderBrentSolver solver = new BracketingNthOrderBrentSolver(1e-12, ps * 1e-8, 1e-9, 5);
             p2 = solver.solve(500, p -> trial(omega, p).residual(), lo, hi, AllowedSolution.ANY_SIDE);
         }
         return point(omega, p2, trial(omega, p2));
@@ -60,7 +65,14 @@ final class CoupledSolver {
         Gas gas = model.gas();
         TurbineGeometry g = model.geometry();
         SupplyPath supply = model.supply();
-        SeriesFlow series = SeriesSolver.solve(gas, supply, nozzle, p2);
+        SeriesFlow series;
+        if (p2 <= chokingBackPa) {
+            // choked nozzle: the plenum pressure no longer depends on p2, only the jet's expansion does
+            JetState jet = nozzle.flow(gas, chokedPlenumPa, supply.supplyTemperatureK(), p2);
+            series = new SeriesFlow(chokedPlenumPa, jet.massFlowKgPerS(), jet);
+        } else {
+            series = SeriesSolver.solve(gas, supply, nozzle, p2);
+        }
         double m = series.massFlowKgPerS();
         double vThetaJet = series.jet().jetVelocityMPerS() * Math.cos(Math.toRadians(g.jetAngleDeg()));
         double phi = g.admissionFraction();

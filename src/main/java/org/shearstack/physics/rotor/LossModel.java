@@ -26,11 +26,11 @@ public record LossModel(int bearingCount, double bearingBoreM, double bearingMea
     }
 
     /**
-     * Two shielded 608 bearings (8 × 22 mm, d_m 15 mm), 2 N each, grease base oil 70 cSt; exhaust ports losing
+     * Two shielded 608 bearings (8 × 22 mm, d_m 15 mm), 2 N each, grease base oil 40 cSt at running temperature; exhaust ports losing
      * 1.5 dynamic heads (0.5 sharp entry + 1 exit, Idelchik's handbook values from memory).
      */
     public static LossModel twoShielded608() {
-        return new LossModel(2, 0.008, 0.015, 2.0, 0, 70.0, 1.5);
+        return new LossModel(2, 0.008, 0.015, 2.0, 0, 40.0, 1.5);
     }
 
     /** No bearings and a free exhaust (K = 1): for checks of the rotor alone. */

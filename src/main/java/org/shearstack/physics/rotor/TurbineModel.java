@@ -113,10 +113,19 @@ public record TurbineModel(Gas gas, SupplyPath supply, Nozzle nozzle, TurbineGeo
         if (stall.shaftTorqueNm() <= loadTorqueNm.applyAsDouble(0.0)) {
             return stall;
         }
-        double runaway = runawaySpeedRadPerS();
+        DoubleUnaryOperator excess = s -> solver.at(s).shaftTorqueNm() - loadTorqueNm.applyAsDouble(s);
+        double a = 0.0;
+        double b = Math.max(50.0, 0.25 * stall.jetVelocityMPerS() / geometry.outerRadiusM());
+        while (excess.applyAsDouble(b) > 0.0) {
+            a = b;
+            b *= 1.6;
+            if (b * geometry.outerRadiusM() > MAX_TIP_SPEED_M_PER_S) {
+                throw new IllegalStateException("no operating point found below a tip speed of "
+                        + MAX_TIP_SPEED_M_PER_S + " m/s");
+            }
+        }
         BracketingNthOrderBrentSolver brent = new BracketingNthOrderBrentSolver(1e-10, 1e-6, 1e-12, 5);
-        double w = brent.solve(200, s -> solver.at(s).shaftTorqueNm() - loadTorqueNm.applyAsDouble(s), 0.0, runaway,
-                AllowedSolution.ANY_SIDE);
+        double w = brent.solve(200, excess::applyAsDouble, a, b, AllowedSolution.ANY_SIDE);
         return solver.at(w);
     }
 

@@ -19,6 +19,30 @@ public final class SeriesSolver {
     private SeriesSolver() {
     }
 
+    /**
+     * The plenum pressure while the nozzle is choked (then independent of the back pressure): where the path's
+     * flow equals the nozzle's choked flow. Valid for every back pressure at or below
+     * {@link #chokingBackPressurePa}.
+     */
+    public static double chokedPlenumPressurePa(Gas gas, SupplyPath supply, Nozzle nozzle) {
+        double ps = supply.supplyPressurePa();
+        double ts = supply.supplyTemperatureK();
+        BracketingNthOrderBrentSolver solver = new BracketingNthOrderBrentSolver(1e-12, ps * 1e-12, 1e-15, 5);
+        return solver.solve(MAX_EVALUATIONS,
+                p -> supply.path().massFlowKgPerS(ps, p, ts) - nozzle.chokedMassFlowKgPerS(gas, p, ts),
+                1e-9 * ps, ps, AllowedSolution.ANY_SIDE);
+    }
+
+    /** Highest back pressure at which the nozzle is still choked when its plenum is at {@code plenumPa}. */
+    public static double chokingBackPressurePa(Gas gas, Nozzle nozzle, double plenumPa) {
+        double g = gas.gamma();
+        double ratio = nozzle.kind() == org.shearstack.physics.gas.NozzleKind.CONVERGING
+                ? org.shearstack.physics.gas.Isentropic.criticalPressureRatio(g)
+                : org.shearstack.physics.gas.Isentropic.pressureRatio(g,
+                        org.shearstack.physics.gas.Isentropic.machFromAreaRatio(g, nozzle.areaRatio(), false));
+        return ratio * plenumPa;
+    }
+
     /** The operating point for a nozzle discharging into {@code backPressurePa}. */
     public static SeriesFlow solve(Gas gas, SupplyPath supply, Nozzle nozzle, double backPressurePa) {
         double ps = supply.supplyPressurePa();

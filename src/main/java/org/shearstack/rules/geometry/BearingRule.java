@@ -18,8 +18,8 @@ public final class BearingRule extends GeoRule {
 
     /** n·d_m limit for shielded, grease-lubricated deep-groove ball bearings (physics.md §7, PTI: 150 000–400 000). */
     static final double SPEED_FACTOR_LIMIT = 400_000;
-    /** Smallest printed journal: the 8 mm bore of the 608 every maker has (common practice). */
-    static final double MIN_PRINTED_JOURNAL_MM = 8;
+    /** Printed journal per disc diameter: an 80 mm rotor gets the 8 mm bore of the common 608 (common practice). */
+    static final double PRINTED_JOURNAL_PER_DIAMETER = 0.1;
 
     public BearingRule() {
         super("GEO-BEARING", List.of(ROTOR_SHAFT, ROTOR_SHAFT_DIAMETER, ROTOR_DIAMETER, BEARINGS, TARGET_SPEED),
@@ -39,9 +39,9 @@ public final class BearingRule extends GeoRule {
             minJournal = in.get(ROTOR_SHAFT_DIAMETER);
             out.put(SHAFT_MIN_JOURNAL, minJournal, "the metal shaft's diameter", "spec");
         } else {
-            minJournal = Math.max(MIN_PRINTED_JOURNAL_MM, in.get(ROTOR_DIAMETER) / 12);
-            out.put(SHAFT_MIN_JOURNAL, minJournal, "max(8 mm, disc diameter / 12) for a printed shaft",
-                    "common practice: printed shafts need girth to stay stiff; 8 mm suits the common 608");
+            minJournal = Math.min(25, Math.max(3, PRINTED_JOURNAL_PER_DIAMETER * in.get(ROTOR_DIAMETER)));
+            out.put(SHAFT_MIN_JOURNAL, minJournal, "disc diameter / 10, between 3 and 25 mm, for a printed shaft",
+                    "common practice: printed shafts need girth to stay stiff; an 80 mm rotor gets the common 608");
         }
         String asked = in.has(BEARINGS) ? in.text(BEARINGS).trim() : "auto";
         Bearing b;

@@ -47,6 +47,11 @@ public final class ExhaustPortRule extends GeoRule {
             dp = 2 * rc * Math.sin(Math.PI / 6) - spokeMin;
             how = "6 ports, shrunk so the spokes keep their width";
         }
+        if (dp < 2 * lw) {
+            throw new IllegalArgumentException("rotor.diameter: " + mm(in.get(ROTOR_DIAMETER))
+                    + " leaves no room for exhaust ports around a hexagon of " + mm(in.get(DISC_BORE_ACROSS_FLATS))
+                    + "; expected a larger rotor or a smaller shaft");
+        }
         out.put(PORT_COUNT, count, how + "; a multiple of 6 so ports align on the hexagon in any of its positions",
                 "geometry; spokes ≥ " + SPOKE_LINES + " line widths: common practice");
         out.put(PORT_DIAMETER, dp, "exhaust radius − (hex corner + structural wall), limited by the spokes",

@@ -60,6 +60,8 @@ public final class GeoKeys {
     public static final Key INLET_PORT = text("inlet-port");
     public static final Key INLET_PORT_SIZE = len("inlet-port.size");
     public static final Key NOZZLE_KIND = text("nozzle.kind");
+    /** "true" to make the nozzle a drop-in block. */
+    public static final Key NOZZLE_INSERT = text("nozzle.insert");
     public static final Key NOZZLE_THROAT_AREA = Key.of("nozzle.throat-area", AREA);
     public static final Key NOZZLE_EXIT_AREA = Key.of("nozzle.exit-area", AREA);
     public static final Key NOZZLE_JET_ANGLE = Key.of("nozzle.jet-angle", ANGLE);

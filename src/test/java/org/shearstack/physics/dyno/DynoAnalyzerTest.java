@@ -58,4 +58,65 @@ class DynoAnalyzerTest {
         assertEquals(truth, r.summary().noLoadSpeedRadPerS(), 0.01 * truth);
         assertEquals(0.05, r.summary().stallRotorTorqueNm(), 0.05 * 0.05);
     }
+
+    @Test
+    void logWithoutCoastDownGivesAFindingAndShaftTorqueOnly() {
+        SyntheticBenchRun run = new SyntheticBenchRun();
+        run.endS = run.airOffS;
+        DynoResult r = DynoAnalyzer.analyze(run.log(), DynoInputs.of(run.inertiaKgM2));
+        assertTrue(r.loss().isEmpty());
+        assertTrue(r.findings().stream().anyMatch(f -> f.code().equals("DYNO-NO-COASTDOWN")));
+        DynoPoint p = r.runUp().get(r.runUp().size() / 2);
+        assertEquals(p.shaftTorqueNm(), p.rotorTorqueNm(), 0);
+    }
+
+    @Test
+    void flatLogIsRefusedWithAClearMessage() {
+        double[] t = new double[50];
+        double[] w = new double[50];
+        for (int i = 0; i < 50; i++) {
+            t[i] = 0.1 * i;
+            w[i] = 1000 + (i % 2);
+        }
+        IllegalArgumentException e = org.junit.jupiter.api.Assertions.assertThrows(IllegalArgumentException.class,
+                () -> DynoAnalyzer.analyze(SpeedLog.of(t, w), DynoInputs.of(1e-4)));
+        assertEquals("no run-up and no coast-down found: the speed never rises or falls by 30 % of its top value;"
+                + " give them with --run-up/--coast-down START:END (seconds)", e.getMessage());
+    }
+
+    @Test
+    void comparesWithAPrediction() {
+        SyntheticBenchRun run = new SyntheticBenchRun();
+        Prediction exact = new Prediction(run.airTorqueNm, Prediction.Basis.ROTOR, "the simulation's own curve");
+        Prediction high = new Prediction(w -> 1.25 * run.airTorqueNm.applyAsDouble(w), Prediction.Basis.ROTOR, "25 % high");
+        DynoResult a = DynoAnalyzer.analyze(run.log(), DynoInputs.of(run.inertiaKgM2).withPrediction(exact));
+        DynoResult b = DynoAnalyzer.analyze(run.log(), DynoInputs.of(run.inertiaKgM2).withPrediction(high));
+        assertEquals(1.0, a.comparison().orElseThrow().meanRatio(), 0.02);
+        assertEquals(0.8, b.comparison().orElseThrow().meanRatio(), 0.02);
+    }
+
+    /**
+     * A generator loaded while the air is on (k_e = 0.0191 V·s/rad, R_a = 2 Ω, R_L = 10 Ω; physics.md §8.3):
+     * k_e comes from the open-circuit coast-down, the rotor torque still matches the air torque, and the generator
+     * efficiency V/E equals R_L/(R_a + R_L) = 0.8333 (voltage divider, V = E − I·R_a).
+     */
+    @Test
+    void loadedGeneratorRun() {
+        SyntheticBenchRun run = new SyntheticBenchRun();
+        run.keVsPerRad = 0.0191;
+        DynoResult r = DynoAnalyzer.analyze(run.log(), DynoInputs.of(run.inertiaKgM2));
+        assertEquals(0.0191, r.summary().backEmfConstantVsPerRad(), 0.01 * 0.0191);
+        double noLoad = r.summary().noLoadSpeedRadPerS();
+        for (CurvePoint p : r.curve()) {
+            double w = p.speedRadPerS();
+            if (w >= 0.2 * noLoad && w <= 0.8 * noLoad) {
+                double truth = run.airTorqueNm.applyAsDouble(w);
+                assertEquals(truth, p.rotorTorqueNm(), 0.05 * truth, "rotor torque at " + w);
+            }
+        }
+        DynoPoint mid = r.runUp().get(r.runUp().size() / 2);
+        assertEquals(10.0 / 12.0, mid.generatorEfficiency(), 0.02);
+        assertEquals(mid.electricalPowerW(), mid.generatorEfficiency() * mid.generatorTorqueNm() * mid.speedRadPerS(),
+                0.01 * mid.electricalPowerW());
+    }
 }

@@ -23,6 +23,10 @@ final class SyntheticBenchRun {
     double rpmStep = 1;
     double jitterShare = 0.02;
     long seed = 42;
+    /** Generator k_e (V·s/rad); 0 = no generator columns. Load connected only while the air is on. */
+    double keVsPerRad = 0;
+    double armatureOhm = 2;
+    double loadOhm = 10;
 
     /** The simulated log. */
     SpeedLog log() {
@@ -45,7 +49,12 @@ final class SyntheticBenchRun {
                 double rpm = mean * 30 / Math.PI;
                 rpm *= 1 + noiseShare * rnd.nextGaussian();
                 rpm = Math.max(0, Math.round(rpm / rpmStep) * rpmStep);
-                rows.add(new double[] {t, rpm * Math.PI / 30});
+                boolean loaded = t >= airOnS && t < airOffS;
+                double emf = keVsPerRad * mean;
+                double amps = loaded ? emf / (armatureOhm + loadOhm) : 0;
+                double volts = loaded ? amps * loadOhm : emf;
+                rows.add(new double[] {t, rpm * Math.PI / 30, volts * (1 + 0.002 * rnd.nextGaussian()),
+                    amps * (1 + 0.002 * rnd.nextGaussian())});
                 integral = 0;
                 lastSample = t;
                 nextSample = t + period * (1 + jitterShare * (2 * rnd.nextDouble() - 1));
@@ -53,11 +62,15 @@ final class SyntheticBenchRun {
         }
         double[] ts = new double[rows.size()];
         double[] ws = new double[rows.size()];
+        double[] vs = new double[rows.size()];
+        double[] is = new double[rows.size()];
         for (int i = 0; i < ts.length; i++) {
             ts[i] = rows.get(i)[0];
             ws[i] = rows.get(i)[1];
+            vs[i] = rows.get(i)[2];
+            is[i] = rows.get(i)[3];
         }
-        return SpeedLog.of(ts, ws);
+        return keVsPerRad > 0 ? SpeedLog.of(ts, ws, vs, is) : SpeedLog.of(ts, ws);
     }
 
     private double step(double t, double w, double dt) {
@@ -69,7 +82,11 @@ final class SyntheticBenchRun {
     }
 
     private double rate(double t, double w) {
-        double drive = t >= airOnS && t < airOffS ? airTorqueNm.applyAsDouble(w) : 0;
+        boolean on = t >= airOnS && t < airOffS;
+        double drive = on ? airTorqueNm.applyAsDouble(w) : 0;
+        if (on && keVsPerRad > 0) {
+            drive -= keVsPerRad * keVsPerRad * w / (armatureOhm + loadOhm); // k_t I with k_t = k_e (physics.md §8.3)
+        }
         double lossT = w > 0 ? loss.torqueNm(w) : 0;
         double net = drive - lossT;
         return w <= 0 && net < 0 ? 0 : net / inertiaKgM2;

@@ -18,24 +18,24 @@ import org.shearstack.rules.RuleOutputs;
  * A tiny stand-in for the engine, for rule tests: runs rules in dependency order over a map of inputs,
  * refuses undeclared reads and writes, two writers of one key, and a rule that leaves a declared key unwritten.
  */
-final class RuleHarness {
+public final class RuleHarness {
 
-    final Map<Key, Double> numbers = new LinkedHashMap<>();
-    final Map<Key, String> texts = new LinkedHashMap<>();
-    final Map<Key, String> formulas = new HashMap<>();
-    final Map<Key, String> writers = new HashMap<>();
+    public final Map<Key, Double> numbers = new LinkedHashMap<>();
+    public final Map<Key, String> texts = new LinkedHashMap<>();
+    public final Map<Key, String> formulas = new HashMap<>();
+    public final Map<Key, String> writers = new HashMap<>();
 
-    RuleHarness put(Key k, double v) {
+    public RuleHarness put(Key k, double v) {
         numbers.put(k, v);
         return this;
     }
 
-    RuleHarness text(Key k, String v) {
+    public RuleHarness text(Key k, String v) {
         texts.put(k, v);
         return this;
     }
 
-    RuleHarness run(List<Rule> rules) {
+    public RuleHarness run(List<Rule> rules) {
         Map<Key, Rule> writerOf = new HashMap<>();
         for (Rule r : rules) {
             for (Key k : r.writes()) {
@@ -143,7 +143,7 @@ final class RuleHarness {
         }
     }
 
-    double get(Key k) {
+    public double get(Key k) {
         return numbers.get(k);
     }
 }

@@ -1,0 +1,266 @@
+package org.shearstack.io.mesh;
+
+import java.io.BufferedOutputStream;
+import java.io.BufferedWriter;
+import java.io.ByteArrayOutputStream;
+import java.io.FilterOutputStream;
+import java.io.IOException;
+import java.io.OutputStream;
+import java.io.OutputStreamWriter;
+import java.io.Writer;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.time.LocalDateTime;
+import java.util.List;
+import java.util.Map;
+import java.util.zip.Deflater;
+import java.util.zip.ZipEntry;
+import java.util.zip.ZipOutputStream;
+
+import org.shearstack.geom.Mesh;
+import org.shearstack.geom.Transform;
+
+/**
+ * Writes a 3MF package per the 3MF Core Specification 1.4.0: {@code [Content_Types].xml}, {@code _rels/.rels}
+ * (StartPart, and Thumbnail when present), the model part {@code 3D/3dmodel.model} (unit millimeter,
+ * metadata, one basematerials group for the part colours, mesh objects, assembly objects with components,
+ * build items with transforms) and an optional {@code Metadata/thumbnail.png}. The model XML is streamed,
+ * entries are written in a fixed order with a fixed time (1980-01-01 00:00, local DOS time, no extra
+ * fields) so the same model gives the same bytes.
+ */
+public final class ThreeMfWriter {
+
+    public static final String CORE_NAMESPACE = "http://schemas.microsoft.com/3dmanufacturing/core/2015/02";
+    static final String MODEL_ENTRY = "3D/3dmodel.model";
+    static final String THUMBNAIL_ENTRY = "Metadata/thumbnail.png";
+    static final String START_PART_TYPE = "http://schemas.microsoft.com/3dmanufacturing/2013/01/3dmodel";
+    static final String THUMBNAIL_TYPE = "http://schemas.openxmlformats.org/package/2006/relationships/metadata/thumbnail";
+    private static final LocalDateTime ENTRY_TIME = LocalDateTime.of(1980, 1, 1, 0, 0);
+
+    private ThreeMfWriter() {
+    }
+
+    public static void write(ThreeMfModel model, OutputStream out) throws IOException {
+        ZipOutputStream zip = new ZipOutputStream(new NonClosing(out), StandardCharsets.UTF_8);
+        zip.setLevel(Deflater.DEFAULT_COMPRESSION);
+        boolean thumb = model.thumbnailPng() != null;
+        entry(zip, "[Content_Types].xml");
+        text(zip, contentTypes(thumb));
+        entry(zip, "_rels/.rels");
+        text(zip, rels(thumb));
+        entry(zip, MODEL_ENTRY);
+        Writer w = new BufferedWriter(new OutputStreamWriter(new NonClosing(zip), StandardCharsets.UTF_8), 1 << 16);
+        writeModel(model, w);
+        w.flush();
+        if (thumb) {
+            entry(zip, THUMBNAIL_ENTRY);
+            zip.write(model.thumbnailPng());
+        }
+        zip.closeEntry();
+        zip.finish();
+        zip.flush();
+    }
+
+    public static byte[] toBytes(ThreeMfModel model) {
+        ByteArrayOutputStream out = new ByteArrayOutputStream();
+        try {
+            write(model, out);
+        } catch (IOException e) {
+            throw new IllegalStateException("in-memory write failed", e);
+        }
+        return out.toByteArray();
+    }
+
+    /** Writes atomically: to a temporary file beside the target, then renamed over it. */
+    public static void write(ThreeMfModel model, Path file) throws IOException {
+        Path dir = file.toAbsolutePath().getParent();
+        Path tmp = Files.createTempFile(dir, ".3mf-", ".part");
+        try {
+            try (OutputStream out = new BufferedOutputStream(Files.newOutputStream(tmp), 1 << 16)) {
+                write(model, out);
+            }
+            Files.move(tmp, file, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
+        } finally {
+            Files.deleteIfExists(tmp);
+        }
+    }
+
+    /** The model part's XML, for tests that validate it against the schema. */
+    public static String modelXml(ThreeMfModel model) {
+        java.io.StringWriter sw = new java.io.StringWriter();
+        try {
+            writeModel(model, sw);
+        } catch (IOException e) {
+            throw new IllegalStateException(e);
+        }
+        return sw.toString();
+    }
+
+    private static void entry(ZipOutputStream zip, String name) throws IOException {
+        ZipEntry e = new ZipEntry(name);
+        e.setTimeLocal(ENTRY_TIME);
+        zip.putNextEntry(e);
+    }
+
+    private static void text(ZipOutputStream zip, String s) throws IOException {
+        zip.write(s.getBytes(StandardCharsets.UTF_8));
+    }
+
+    static String contentTypes(boolean thumbnail) {
+        return "<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n"
+                + "<Types xmlns=\"http://schemas.openxmlformats.org/package/2006/content-types\">\n"
+                + " <Default Extension=\"rels\" ContentType=\"application/vnd.openxmlformats-package.relationships+xml\"/>\n"
+                + " <Default Extension=\"model\" ContentType=\"application/vnd.ms-package.3dmanufacturing-3dmodel+xml\"/>\n"
+                + (thumbnail ? " <Default Extension=\"png\" ContentType=\"image/png\"/>\n" : "")
+                + "</Types>\n";
+    }
+
+    static String rels(boolean thumbnail) {
+        return "<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n"
+                + "<Relationships xmlns=\"http://schemas.openxmlformats.org/package/2006/relationships\">\n"
+                + " <Relationship Id=\"rel0\" Target=\"/" + MODEL_ENTRY + "\" Type=\"" + START_PART_TYPE + "\"/>\n"
+                + (thumbnail ? " <Relationship Id=\"rel1\" Target=\"/" + THUMBNAIL_ENTRY + "\" Type=\"" + THUMBNAIL_TYPE
+                        + "\"/>\n" : "")
+                + "</Relationships>\n";
+    }
+
+    private static void writeModel(ThreeMfModel model, Writer w) throws IOException {
+        boolean own = model.metadata().keySet().stream().anyMatch(k -> k.startsWith("shearstack:"));
+        w.write("<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n<model unit=\"millimeter\" xml:lang=\"en-US\" xmlns=\"");
+        w.write(CORE_NAMESPACE);
+        w.write('"');
+        if (own) {
+            w.write(" xmlns:shearstack=\"" + ThreeMfModel.SHEARSTACK_NAMESPACE + "\"");
+        }
+        w.write(">\n");
+        for (Map.Entry<String, String> m : model.metadata().entrySet()) {
+            w.write(" <metadata name=\"" + escape(m.getKey()) + "\">" + escape(m.getValue()) + "</metadata>\n");
+        }
+        w.write(" <resources>\n");
+        List<String> colours = model.colours();
+        int materialsId = 1;
+        for (ThreeMfModel.ThreeMfObject o : model.objects()) {
+            materialsId = Math.max(materialsId, o.id() + 1);
+        }
+        if (!colours.isEmpty()) {
+            w.write("  <basematerials id=\"" + materialsId + "\">\n");
+            for (int i = 0; i < colours.size(); i++) {
+                w.write("   <base name=\"colour " + (i + 1) + "\" displaycolor=\"" + colours.get(i) + "\"/>\n");
+            }
+            w.write("  </basematerials>\n");
+        }
+        for (ThreeMfModel.ThreeMfObject o : model.objects()) {
+            w.write("  <object id=\"" + o.id() + "\" type=\"model\" name=\"" + escape(o.name()) + "\"");
+            if (o.colourHex() != null) {
+                w.write(" pid=\"" + materialsId + "\" pindex=\"" + colours.indexOf(o.colourHex()) + "\"");
+            }
+            w.write(">\n");
+            if (o.isAssembly()) {
+                w.write("   <components>\n");
+                for (ThreeMfModel.Component c : o.components()) {
+                    w.write("    <component objectid=\"" + c.objectId() + "\"" + transformAttribute(c.transform()) + "/>\n");
+                }
+                w.write("   </components>\n");
+            } else {
+                writeMesh(o.mesh(), w);
+            }
+            w.write("  </object>\n");
+        }
+        w.write(" </resources>\n <build>\n");
+        for (ThreeMfModel.Item i : model.items()) {
+            w.write("  <item objectid=\"" + i.objectId() + "\"" + transformAttribute(i.transform()));
+            if (i.partNumber() != null) {
+                w.write(" partnumber=\"" + escape(i.partNumber()) + "\"");
+            }
+            w.write("/>\n");
+        }
+        w.write(" </build>\n</model>\n");
+    }
+
+    private static void writeMesh(Mesh mesh, Writer w) throws IOException {
+        w.write("   <mesh>\n    <vertices>\n");
+        StringBuilder sb = new StringBuilder(96);
+        for (int v = 0; v < mesh.vertexCount(); v++) {
+            sb.setLength(0);
+            sb.append("     <vertex x=\"").append(number(mesh.x(v))).append("\" y=\"").append(number(mesh.y(v)))
+                    .append("\" z=\"").append(number(mesh.z(v))).append("\"/>\n");
+            w.append(sb);
+        }
+        w.write("    </vertices>\n    <triangles>\n");
+        for (int t = 0; t < mesh.triangleCount(); t++) {
+            sb.setLength(0);
+            sb.append("     <triangle v1=\"").append(mesh.corner(t, 0)).append("\" v2=\"").append(mesh.corner(t, 1))
+                    .append("\" v3=\"").append(mesh.corner(t, 2)).append("\"/>\n");
+            w.append(sb);
+        }
+        w.write("    </triangles>\n   </mesh>\n");
+    }
+
+    private static String transformAttribute(Transform t) {
+        if (t.isIdentity()) {
+            return "";
+        }
+        double[] m = t.to3mfMatrix();
+        StringBuilder sb = new StringBuilder(" transform=\"");
+        for (int i = 0; i < 12; i++) {
+            if (i > 0) {
+                sb.append(' ');
+            }
+            sb.append(number(m[i]));
+        }
+        return sb.append('"').toString();
+    }
+
+    /** Shortest decimal that reads back to the same double; locale-independent; never "-0". */
+    static String number(double v) {
+        if (!Double.isFinite(v)) {
+            throw new IllegalArgumentException("3MF number: expected a finite value, found " + v);
+        }
+        double x = v + 0.0;
+        if (x == Math.rint(x) && Math.abs(x) < 1e15) {
+            return Long.toString((long) x);
+        }
+        return Double.toString(x);
+    }
+
+    static String escape(String s) {
+        StringBuilder sb = new StringBuilder(s.length());
+        for (int i = 0; i < s.length(); i++) {
+            char c = s.charAt(i);
+            switch (c) {
+                case '<' -> sb.append("&lt;");
+                case '>' -> sb.append("&gt;");
+                case '&' -> sb.append("&amp;");
+                case '"' -> sb.append("&quot;");
+                case '\'' -> sb.append("&apos;");
+                default -> {
+                    if (c < 0x20 && c != '\t' && c != '\n' && c != '\r') {
+                        sb.append('?');
+                    } else {
+                        sb.append(c);
+                    }
+                }
+            }
+        }
+        return sb.toString();
+    }
+
+    /** Keeps the zip (or caller's) stream open when a wrapper is closed. */
+    private static final class NonClosing extends FilterOutputStream {
+        NonClosing(OutputStream out) {
+            super(out);
+        }
+
+        @Override
+        public void write(byte[] b, int off, int len) throws IOException {
+            out.write(b, off, len);
+        }
+
+        @Override
+        public void close() throws IOException {
+            flush();
+        }
+    }
+}

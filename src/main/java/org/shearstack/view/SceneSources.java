@@ -1,0 +1,45 @@
+package org.shearstack.view;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Locale;
+import org.shearstack.profile.Profiles;
+
+/**
+ * Chooses how to read what the user named: a spec (.yaml, .yml), a kit folder, a 3MF file.
+ */
+public final class SceneSources {
+
+    private SceneSources() {
+    }
+
+    /**
+     * A source for a path.
+     *
+     * @throws SceneLoadException naming the path when it does not exist or is of a kind the viewer cannot read
+     */
+    public static SceneSource forPath(Path path, Profiles profiles) throws SceneLoadException {
+        if (!Files.exists(path)) {
+            throw new SceneLoadException(path + ": expected a spec (.yaml), a kit folder or a .3mf file, found nothing "
+                    + "at that path");
+        }
+        String name = String.valueOf(path.getFileName()).toLowerCase(Locale.ROOT);
+        if (Files.isDirectory(path)) {
+            throw new SceneLoadException(path + ": reading a kit folder is not available in this version yet; "
+                    + "view the spec that made it instead");
+        }
+        if (name.endsWith(".yaml") || name.endsWith(".yml")) {
+            return SpecSceneSource.of(path, profiles, DesignScenes::withoutParts);
+        }
+        if (name.endsWith(".3mf")) {
+            throw new SceneLoadException(path + ": reading 3MF files is not available in this version yet");
+        }
+        throw new SceneLoadException(path + ": expected a spec (.yaml or .yml), a kit folder or a .3mf file, found '"
+                + path.getFileName() + "'");
+    }
+
+    /** The built-in sample assembly. */
+    public static SceneSource sample() {
+        return SceneSource.fixed(SampleAssembly.scene());
+    }
+}
