@@ -3,18 +3,24 @@ package org.shearstack.job;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
+import org.shearstack.assembly.Kit;
 import org.shearstack.check.Finding;
 import org.shearstack.check.safety.BurstCheck;
 import org.shearstack.check.safety.SafetySummary;
 import org.shearstack.design.ResolvedDesign;
+import org.shearstack.geom.GeometryContext;
+import org.shearstack.io.report.BomLine;
 import org.shearstack.io.report.Omission;
+import org.shearstack.io.report.PartData;
 import org.shearstack.io.report.PerformanceData;
+import org.shearstack.io.report.PlateData;
 import org.shearstack.io.report.Preview;
 import org.shearstack.io.report.ReportData;
 import org.shearstack.profile.Profiles;
 import org.shearstack.rules.DesignResolver;
 import org.shearstack.rules.Engine;
 import org.shearstack.rules.RuleCatalog;
+import org.shearstack.rules.geometry.GeoKeys;
 import org.shearstack.spec.Spec;
 
 /**
@@ -38,6 +44,12 @@ public final class DesignJob {
         return fromDesign(design, options);
     }
 
+    /** The geometry context of the design: the default grid and the spec's chord tolerance. */
+    static GeometryContext geometryContext(ResolvedDesign design) {
+        return design.key("output.chord-tolerance").flatMap(design::find)
+                .map(GeometryContext::withChordTolerance).orElseGet(GeometryContext::standard);
+    }
+
     /** The stages after the rules, for a design resolved elsewhere. */
     public static DesignResult fromDesign(ResolvedDesign design, JobOptions options) {
         List<Omission> omissions = new ArrayList<>();
@@ -58,14 +70,29 @@ public final class DesignJob {
         burst.ifPresent(b -> findings.addAll(b.findings()));
         Optional<SafetySummary> safety = burst.map(BurstCheck.Result::summary);
 
-        omissions.add(new Omission("parts", "the kit generator (parts, meshes, assembly, plates) is not part of"
-                + " this build yet; no STL or 3MF files were written."));
-        omissions.add(new Omission("bom", "the bill of materials comes with the kit generator, not part of this"
-                + " build yet."));
-        Preview preview = Preview.none("there is no assembly to show without the kit generator.");
+        Optional<Kit> kit = Optional.empty();
+        Preview preview;
+        if (!options.meshes()) {
+            omissions.add(new Omission("parts", "a check-only run: no parts, meshes or plates were built."));
+            omissions.add(new Omission("bom", "a check-only run builds no kit, so there is no bill of materials."));
+            preview = Preview.none("a check-only run builds no assembly.");
+        } else if (!design.has(GeoKeys.CHAMBER_DIAMETER)) {
+            omissions.add(new Omission("parts", "the design has no part dimensions (housing.chamber-diameter and the"
+                    + " other GEO- values): the geometry rules did not run, so no kit was built."));
+            omissions.add(new Omission("bom", "no kit was built, so there is no bill of materials."));
+            preview = Preview.none("no kit was built, so there is no assembly to show.");
+        } else {
+            Kit k = Kit.build(design, geometryContext(design));
+            kit = Optional.of(k);
+            findings.addAll(k.findings());
+            preview = PreviewStage.render(k, options.preview());
+        }
+        List<PartData> parts = kit.map(k -> KitStage.parts(k, design)).orElse(List.of());
+        List<BomLine> bom = kit.map(KitStage::bom).orElse(List.of());
+        List<PlateData> plates = kit.map(KitStage::plates).orElse(List.of());
 
-        ReportData report = new ReportData(design, setup.supply(), performance, safety, findings, List.of(),
-                List.of(), List.of(), preview, omissions);
-        return new DesignResult(design, report);
+        ReportData report = new ReportData(design, setup.supply(), performance, safety, findings, parts, bom,
+                plates, preview, omissions);
+        return new DesignResult(design, report, kit);
     }
 }

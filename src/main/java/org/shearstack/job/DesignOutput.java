@@ -5,6 +5,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import org.shearstack.io.AtomicFolder;
+import org.shearstack.io.kit.KitWriter;
 import org.shearstack.io.report.ReportWriter;
 
 /**
@@ -31,6 +32,11 @@ public final class DesignOutput {
     public static Written write(DesignResult result, Path folder) throws IOException {
         List<Path> names = new ArrayList<>();
         Path done = AtomicFolder.write(folder, dir -> {
+            if (result.kit().isPresent()) {
+                // the kit writer replaces the (empty) temporary folder with the kit's files
+                KitWriter.write(result.kit().get(), dir);
+                KitWriter.files(result.kit().get()).forEach(f -> names.add(Path.of(f)));
+            }
             for (Path p : ReportWriter.write(result.report(), dir)) {
                 names.add(dir.relativize(p));
             }

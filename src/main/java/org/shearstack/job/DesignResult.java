@@ -1,6 +1,8 @@
 package org.shearstack.job;
 
 import java.util.Objects;
+import java.util.Optional;
+import org.shearstack.assembly.Kit;
 import org.shearstack.check.Severity;
 import org.shearstack.design.ResolvedDesign;
 import org.shearstack.io.report.ReportData;
@@ -11,12 +13,15 @@ import org.shearstack.io.report.ReportData;
  *
  * @param design  the resolved design
  * @param report  everything the report shows
+ * @param kit     the parts with meshes, assembly, plates and BOM (empty for check-only runs or when the design
+ *                has no part dimensions)
  */
-public record DesignResult(ResolvedDesign design, ReportData report) {
+public record DesignResult(ResolvedDesign design, ReportData report, Optional<Kit> kit) {
 
     public DesignResult {
         Objects.requireNonNull(design, "design");
         Objects.requireNonNull(report, "report");
+        Objects.requireNonNull(kit, "kit");
     }
 
     /** OK, CAUTION or FAIL: the worst finding (an unchecked rotor is at least a CAUTION). */
