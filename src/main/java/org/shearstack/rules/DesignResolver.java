@@ -46,7 +46,11 @@ public final class DesignResolver {
         seeds.addAll(ProfileSeeds.printer(printer.orElseThrow()));
         seeds.addAll(ProfileSeeds.filament(filament.orElseThrow()));
         Resolution r = engine.resolve(spec.name(), spec.sourceFile(), seeds);
+        java.util.Set<String> reported = new java.util.HashSet<>();
         for (MissingInput m : r.missing()) {
+            if (!reported.add(m.key().name())) {
+                continue; // one problem per missing key, naming the first rule that needed it
+            }
             problems.add(spec.problemAt(m.key().name(), "a value for " + m.key().name() + " (rule " + m.ruleId()
                     + " needs it)", "nothing", ""));
         }

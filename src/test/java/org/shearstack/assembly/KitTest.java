@@ -1,0 +1,137 @@
+package org.shearstack.assembly;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.stream.Stream;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.shearstack.check.Finding;
+import org.shearstack.check.Severity;
+import org.shearstack.geom.GeometryContext;
+import org.shearstack.io.kit.KitWriter;
+import org.shearstack.part.DesignValues;
+import org.shearstack.rules.ProfileKeys;
+import org.shearstack.rules.geometry.GeoKeys;
+import org.shearstack.rules.geometry.TestDesigns;
+
+class KitTest {
+
+    static final GeometryContext CTX = GeometryContext.withChordTolerance(0.05);
+
+    static void assertPasses(Kit kit) {
+        List<Finding> fails = kit.findings().stream().filter(f -> f.severity() == Severity.FAIL).toList();
+        assertTrue(fails.isEmpty(), fails.stream().map(Finding::message).toList().toString());
+    }
+
+    static Finding finding(Kit kit, String code) {
+        return kit.findings().stream().filter(f -> f.code().equals(code)).findFirst().orElseThrow();
+    }
+
+    @Test
+    void demoKitAssemblesWithTheChosenClearances() {
+        Kit kit = Kit.build("demo", TestDesigns.demo(), CTX);
+        assertPasses(kit);
+        // the swept discs keep the rules' radial clearance to the housing, and the pack its end play
+        assertEquals(kit.dims().radialClearance(), finding(kit, "ASM-RADIAL-CLEARANCE").measured(), 0.05);
+        assertEquals(kit.dims().endPlay(), finding(kit, "ASM-END-PLAY").measured(), 1e-9);
+        // the axial stack fills the chamber: pack + 2 × end play = chamber depth
+        assertEquals(kit.dims().chamberDepth(), kit.dims().packHeight() + 2 * kit.dims().endPlay(), 1e-9);
+        int discs = kit.parts().stream().filter(p -> p.name().equals("rotor-disc")).findFirst().orElseThrow().count();
+        assertEquals(8, discs);
+        assertFalse(kit.plates().isEmpty());
+    }
+
+    @Test
+    void extremeAndRandomKitsAssemble() {
+        assertPasses(Kit.build("smallest", TestDesigns.smallest(), CTX));
+        assertPasses(Kit.build("random-7", TestDesigns.random(7), CTX));
+    }
+
+    @Test
+    void aDisplacedPartIsCaught() {
+        Kit kit = Kit.build("demo", TestDesigns.demo(), CTX);
+        List<Body> bodies = new java.util.ArrayList<>();
+        for (KitPart p : kit.parts()) {
+            for (int k = 0; k < p.count(); k++) {
+                Placement pl = p.placements().get(k);
+                if (p.name().equals("rotor-disc") && k == 0) {
+                    pl = pl.raised(-kit.dims().endPlay() - 0.5); // into the free cover
+                }
+                bodies.add(new Body(p.name() + " #" + k, p.family(), p.rotating(), pl.apply(p.solid())));
+            }
+        }
+        List<Finding> f = Interference.check(bodies, kit.dims(), CTX);
+        assertTrue(f.stream().anyMatch(x -> x.code().equals("ASM-INTERFERENCE") && x.severity() == Severity.FAIL));
+        assertTrue(f.stream().anyMatch(x -> x.code().equals("ASM-END-PLAY") && x.severity() == Severity.FAIL));
+    }
+
+    @Test
+    void aPartTooLargeForTheBedFails() {
+        DesignValues v = TestDesigns.demo();
+        DesignValues small = DesignValues.of(k -> k.equals(ProfileKeys.BED_X) || k.equals(ProfileKeys.BED_Y) ? 100 : v.get(k),
+                v::text, k -> k.equals(ProfileKeys.BED_X) || k.equals(ProfileKeys.BED_Y) || v.has(k));
+        Kit kit = Kit.build("demo", small, CTX);
+        assertTrue(kit.findings().stream().anyMatch(f -> f.code().equals("PLATE-TOO-LARGE")
+                && f.part().equals("housing-ring") && f.severity() == Severity.FAIL));
+        for (PrintPlates.Plate p : kit.plates()) {
+            for (PrintPlates.Item i : p.items()) {
+                assertTrue(i.xMm() + i.footprint().widthMm() <= 100 && i.yMm() + i.footprint().heightMm() <= 100);
+            }
+        }
+    }
+
+    @Test
+    void holeSizesFollowThePrinterProfile() {
+        Kit a = Kit.build("a", TestDesigns.demo(), CTX);
+        Kit b = Kit.build("b", TestDesigns.resolve(TestDesigns.demoInputs().put(GeoKeys.HOLE_COMPENSATION, 0.35)), CTX);
+        // the bearing seat's modelled diameter grows by the compensation difference: its section shrinks
+        assertEquals(0.2, b.dims().seatDiameter() - a.dims().seatDiameter(), 1e-12);
+        // and the printed section around the seat loses the ring between the two seat diameters
+        double window = Math.min(a.dims().coverExhaustInner(), b.dims().coverExhaustInner()) - 0.2;
+        double sa = seatWall(a, window);
+        double sb = seatWall(b, window);
+        double expected = Math.PI / 4 * (b.dims().seatDiameter() * b.dims().seatDiameter()
+                - a.dims().seatDiameter() * a.dims().seatDiameter());
+        assertEquals(expected, sa - sb, 0.02 * expected);
+    }
+
+    /** Area of the drive cover's section just below the lead-in, inside the exhaust openings. */
+    static double seatWall(Kit k, double windowDiameter) {
+        KitPart cover = k.parts().stream().filter(p -> p.name().equals("cover-drive")).findFirst().orElseThrow();
+        double u = k.dims().coverThickness() - k.dims().leadInDepth() - 0.01;
+        var slab = cover.solid().slabAt(u).orElseThrow();
+        return slab.region().intersect(org.shearstack.geom.Region.disc(CTX, 0, 0, windowDiameter))
+                .areaMm2();
+    }
+
+    @Test
+    void writingIsRepeatableAndReplacesThePreviousKit(@TempDir Path tmp) throws Exception {
+        Kit kit = Kit.build("demo", TestDesigns.demo(), CTX);
+        Path out = tmp.resolve("kit");
+        KitWriter.write(kit, out);
+        for (String f : KitWriter.files(kit)) {
+            assertTrue(Files.size(out.resolve(f)) > 0, f);
+        }
+        byte[] asm = Files.readAllBytes(out.resolve("assembly.3mf"));
+        byte[] disc = Files.readAllBytes(out.resolve("parts/rotor-disc.stl"));
+        Files.writeString(out.resolve("stale.txt"), "from an older run");
+        Kit again = Kit.build("demo", TestDesigns.demo(), CTX);
+        KitWriter.write(again, out);
+        assertArrayEquals(asm, Files.readAllBytes(out.resolve("assembly.3mf")));
+        assertArrayEquals(disc, Files.readAllBytes(out.resolve("parts/rotor-disc.stl")));
+        assertFalse(Files.exists(out.resolve("stale.txt")));
+        try (Stream<Path> s = Files.list(tmp)) {
+            assertEquals(List.of(out), s.toList());
+        }
+        String bom = Files.readString(out.resolve("bom.csv"));
+        assertTrue(bom.contains("bearing 608,2,"));
+        assertTrue(bom.contains("screw M3 × "));
+    }
+}
