@@ -17,10 +17,7 @@ import picocli.CommandLine.Model.CommandSpec;
             ExplainCommand.class,
             ProfilesCommand.class,
             DynoCommand.class,
-<<<<<<< HEAD
             ViewCommand.class,
-=======
->>>>>>> foundation
             // design, check, supply, family, dyno, view, calibrate, bench: add their classes here
             AutoComplete.GenerateCompletion.class,
         })
