@@ -60,7 +60,13 @@ public final class FamilyPlan {
         List<List<VariedValue>> values = new ArrayList<>();
         Set<String> seenKeys = new HashSet<>();
         for (FamilySection.Vary v : vary) {
-            SpecOverride.checkKey(v.key(), v.file(), v.line(), v.column()).ifPresent(problems::add);
+            java.util.Optional<Problem> badKey = SpecOverride.checkKey(v.key(), v.file(), v.line(), v.column());
+            if (badKey.isPresent()) {
+                problems.add(badKey.get());
+                keys.add(new VariedKey(v.key(), ""));
+                values.add(List.of());
+                continue;
+            }
             if (!seenKeys.add(v.key())) {
                 problems.add(new Problem(v.file(), v.line(), v.column(), v.key(), "each varied key once",
                         "a second " + v.key(), ""));

@@ -25,6 +25,34 @@ public final class FamilyWriter {
         return List.of(csv, html);
     }
 
+    /**
+     * Removes the temporary folders that variants still being written left in the family folder (hidden folders
+     * whose name holds ".writing-", the atomic folder writer's temporaries). Called when a stop gives up waiting.
+     */
+    public static void removeUnfinished(Path folder) {
+        if (!Files.isDirectory(folder)) {
+            return;
+        }
+        try (var list = Files.list(folder)) {
+            for (Path p : list.toList()) {
+                String n = p.getFileName().toString();
+                if (n.startsWith(".") && n.contains(".writing-") && Files.isDirectory(p)) {
+                    deleteTree(p);
+                }
+            }
+        } catch (IOException | java.io.UncheckedIOException e) {
+            // best effort while the process stops
+        }
+    }
+
+    private static void deleteTree(Path root) throws IOException {
+        try (var walk = Files.walk(root)) {
+            for (Path p : walk.sorted(java.util.Comparator.reverseOrder()).toList()) {
+                Files.deleteIfExists(p);
+            }
+        }
+    }
+
     private static Path replace(Path target, String text) throws IOException {
         Path temp = Files.createTempFile(target.getParent(), "." + target.getFileName() + ".", ".tmp");
         try {
