@@ -18,6 +18,7 @@ import picocli.CommandLine.Model.CommandSpec;
             ProfilesCommand.class,
             DynoCommand.class,
             ViewCommand.class,
+            SupplyCommand.class,
             // design, check, supply, family, dyno, view, calibrate, bench: add their classes here
             AutoComplete.GenerateCompletion.class,
         })
