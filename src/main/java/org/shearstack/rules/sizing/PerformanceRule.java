@@ -32,7 +32,7 @@ import org.shearstack.rules.RuleOutputs;
 final class PerformanceRule implements Rule {
 
     private static final String SOURCE = "coupled supply–nozzle–disc-pack model (physics.md §1–§3, §12; derived)";
-    private static final int CURVE_POINTS = 30;
+    private static final int CURVE_POINTS = 20;
 
     @Override
     public String id() {
