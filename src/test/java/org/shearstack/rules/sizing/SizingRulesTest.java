@@ -114,6 +114,21 @@ class SizingRulesTest {
     }
 
     @Test
+    void impossibleSupplyAndPackValuesAreLocatedBadInput() {
+        BadInputException up = assertThrows(BadInputException.class, () -> resolve(String.join("\n",
+                "name: x", "supply:", "  pressure: 3 bar(g)", "  blowdown:", "    tank: 24 L", "    from: 5 bar(g)",
+                "    to: 8 bar(g)", "    time: 10 s", "")));
+        assertTrue(up.problems().stream().map(Problem::format).anyMatch(
+                s -> s.contains("supply.blowdown.to: expected")),
+                up.problems().toString());
+        BadInputException ex = assertThrows(BadInputException.class,
+                () -> resolve(TARGET_SPEC.replace("  gap: 0.8 mm\n", "  gap: 0.8 mm\n  exhaust-diameter: 90 mm\n")));
+        assertTrue(ex.problems().stream().map(Problem::format).anyMatch(
+                s -> s.contains("rotor.exhaust-diameter: expected an exhaust diameter below the disc diameter")),
+                ex.problems().toString());
+    }
+
+    @Test
     void freeAirFlowGivesTheConductance() {
         // C = Q/p1 when the path is choked into ambient (ISO 6358 definition): 120 L/min at 6 bar(g) over 1.01325
         ResolvedDesign d = resolve(TARGET_SPEC.replace("  conductance: 0.6 dm3/(s*bar)\n",
