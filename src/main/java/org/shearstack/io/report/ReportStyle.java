@@ -63,6 +63,7 @@ final class ReportStyle {
             svg .cutline { stroke: var(--fail); stroke-dasharray: 8 3 2 3; }
             svg .dimline { stroke: var(--ink); stroke-width: 0.8; } svg .dim { font-size: 11px; }
             svg .dlabel { fill: var(--muted); font-size: 11px; }
+            table.facts { max-width: 440px; }
             table.facts th { text-align: left; color: var(--muted); font-weight: normal; padding: 2px 14px 2px 0; }
             details { border-bottom: 1px dotted var(--rule); padding: 2px 0; }
             details summary { cursor: pointer; } details dl { margin: 4px 0 8px 20px; }
