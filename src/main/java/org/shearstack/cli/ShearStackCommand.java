@@ -18,7 +18,10 @@ import picocli.CommandLine.Model.CommandSpec;
             ExplainCommand.class,
             ProfilesCommand.class,
             DynoCommand.class,
+            CalibrateCommand.class,
             ViewCommand.class,
+            SupplyCommand.class,
+            CheckCommand.class,
             // design, check, supply, family, dyno, view, calibrate, bench: add their classes here
             AutoComplete.GenerateCompletion.class,
         })

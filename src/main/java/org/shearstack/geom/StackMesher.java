@@ -8,6 +8,7 @@ import org.locationtech.jts.geom.Coordinate;
 import org.locationtech.jts.geom.Geometry;
 import org.locationtech.jts.geom.LineString;
 import org.locationtech.jts.geom.Polygon;
+import org.locationtech.jts.noding.SegmentExtractingNoder;
 import org.locationtech.jts.operation.overlayng.OverlayNG;
 import org.locationtech.jts.triangulate.polygon.PolygonTriangulator;
 import org.locationtech.jts.triangulate.tri.Tri;
@@ -34,25 +35,32 @@ final class StackMesher {
     private final VertexTable vertices;
     private final IntList triangles;
     private int wallSplits;
+    private final boolean assumeNoded;
 
-    private StackMesher(GeometryContext ctx, int expectedTriangles) {
+    private StackMesher(GeometryContext ctx, int expectedTriangles, boolean assumeNoded) {
         this.ctx = ctx;
+        this.assumeNoded = assumeNoded;
         this.vertices = new VertexTable(ctx.scale());
         this.triangles = new IntList(3 * expectedTriangles);
     }
 
-    static Mesh mesh(LayeredSolid solid) {
-        return build(solid).mesh;
+    /** Meshes a solid that came out of {@link LayeredSolid#noded()}. */
+    static Mesh meshNoded(LayeredSolid nodedSolid) {
+        return build(nodedSolid, true).mesh;
     }
 
     /** The mesh together with the number of wall splits needed (0 for a fully noded solid). */
     static Result build(LayeredSolid solid) {
+        return build(solid, false);
+    }
+
+    static Result build(LayeredSolid solid, boolean assumeNoded) {
         List<Band> bands = mergeEqual(solid.slabs());
         int points = 0;
         for (Band b : bands) {
             points += b.geometry.getNumPoints();
         }
-        StackMesher m = new StackMesher(solid.context(), 4 * points);
+        StackMesher m = new StackMesher(solid.context(), 4 * points, assumeNoded);
         m.run(bands);
         return new Result(Mesh.ownedCopy(m.vertices.coordinates(), m.triangles.toArray()), m.wallSplits);
     }
@@ -121,8 +129,8 @@ final class StackMesher {
             up = a;
             down = null;
         } else {
-            up = OverlayNG.overlay(a, b, OverlayNG.DIFFERENCE, ctx.precisionModel());
-            down = OverlayNG.overlay(b, a, OverlayNG.DIFFERENCE, ctx.precisionModel());
+            up = difference(a, b);
+            down = difference(b, a);
         }
         NodeIndex nodes = new NodeIndex(ctx.scale());
         nodes.addAll(a);
@@ -135,6 +143,35 @@ final class StackMesher {
         triangulate(up, iz, true);
         triangulate(down, iz, false);
         return nodes;
+    }
+
+    /**
+     * A − B on the grid. For a noded solid (neighbours already snap-rounded together) the segments are
+     * extracted as they are, skipping a second snap rounding; any failure falls back to the snap-rounding
+     * overlay, and the wall splitting below keeps the mesh closed either way.
+     */
+    private Geometry difference(Geometry a, Geometry b) {
+        if (assumeNoded) {
+            try {
+                Geometry g = OverlayNG.overlay(a, b, OverlayNG.DIFFERENCE, ctx.precisionModel(), new SegmentExtractingNoder());
+                if (onGrid(g)) {
+                    return g;
+                }
+            } catch (RuntimeException e) {
+                // fall through to the robust overlay
+            }
+        }
+        return OverlayNG.overlay(a, b, OverlayNG.DIFFERENCE, ctx.precisionModel());
+    }
+
+    private boolean onGrid(Geometry g) {
+        double scale = ctx.scale();
+        for (Coordinate c : g.getCoordinates()) {
+            if (Math.rint(c.x * scale) != c.x * scale || Math.rint(c.y * scale) != c.y * scale) {
+                return false;
+            }
+        }
+        return true;
     }
 
     private void triangulate(Geometry faces, long iz, boolean up) {
