@@ -10,7 +10,6 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import org.junit.jupiter.api.Test;
@@ -18,10 +17,6 @@ import org.junit.jupiter.api.io.TempDir;
 import org.shearstack.io.report.PinnedDemo;
 import org.shearstack.io.report.ReportHtml;
 import org.shearstack.profile.Profiles;
-import org.shearstack.rules.Engine;
-import org.shearstack.rules.PrinterRules;
-import org.shearstack.rules.Rule;
-import org.shearstack.rules.geometry.GeometryRules;
 import org.shearstack.spec.SpecReader;
 
 /** The whole pipeline with the kit: parts, meshes, plates and BOM written beside the report, all in one folder. */
@@ -38,10 +33,8 @@ class DesignJobKitTest {
     }
 
     private static DesignResult full() {
-        List<Rule> rules = new ArrayList<>(PrinterRules.rules());
-        rules.addAll(GeometryRules.rules());
         return DesignJob.run(SpecReader.read(PinnedDemo.SPEC).orThrow(), Profiles.load(Optional.empty()),
-                Engine.of(rules), new JobOptions(true, false, 11));
+                new JobOptions(true, false, 11));
     }
 
     @Test
