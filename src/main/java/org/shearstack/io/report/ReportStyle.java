@@ -75,6 +75,7 @@ final class ReportStyle {
             table.findings th, table.bom th { text-align: left; background: #ece8de; padding: 5px 8px; }
             table.findings td, table.bom td { border-top: 1px solid var(--rule); padding: 5px 8px; vertical-align: top; }
             td.n { text-align: right; white-space: nowrap; }
+            table.findings td code { white-space: nowrap; }
             .sev { display: inline-block; min-width: 62px; text-align: center; color: #fff; border-radius: 4px;
               padding: 1px 6px; font-weight: bold; text-transform: uppercase; font-size: 11px; }
             .sev.s-ok { background: var(--pass); } .sev.s-caution { background: var(--caution); }
