@@ -41,6 +41,7 @@ class FamilyCommandTest {
     @Test
     void threeVariantsMakeThreeCompleteKitsAndTheTableRowsEqualTheirReports() throws IOException {
         Path dir = tmp.resolve("fam");
+        // the README's first family command, into a temporary folder
         Run r = run("family", DEMO, "--vary", "rotor.diameter=60mm,80mm,100mm", "-o", dir.toString());
         List<List<String>> csv = FamilyFiles.csv(dir.resolve("family.csv"));
         assertEquals(4, csv.size(), "header and three rows");
