@@ -8,6 +8,7 @@ import org.locationtech.jts.geom.Coordinate;
 import org.locationtech.jts.geom.Geometry;
 import org.locationtech.jts.geom.LineString;
 import org.locationtech.jts.geom.Polygon;
+import org.locationtech.jts.noding.SegmentExtractingNoder;
 import org.locationtech.jts.operation.overlayng.OverlayNG;
 import org.locationtech.jts.triangulate.polygon.PolygonTriangulator;
 import org.locationtech.jts.triangulate.tri.Tri;
@@ -121,8 +122,8 @@ final class StackMesher {
             up = a;
             down = null;
         } else {
-            up = OverlayNG.overlay(a, b, OverlayNG.DIFFERENCE, ctx.precisionModel());
-            down = OverlayNG.overlay(b, a, OverlayNG.DIFFERENCE, ctx.precisionModel());
+            up = difference(a, b);
+            down = difference(b, a);
         }
         NodeIndex nodes = new NodeIndex(ctx.scale());
         nodes.addAll(a);
@@ -135,6 +136,24 @@ final class StackMesher {
         triangulate(up, iz, true);
         triangulate(down, iz, false);
         return nodes;
+    }
+
+    /**
+     * a − b. The slabs of a noded solid are fully noded against each other (every crossing is a vertex of both
+     * rings, coincident edges are equal), so the overlay may skip snap-rounding and take the rings' segments as
+     * they are (JTS SegmentExtractingNoder: the fast path JTS offers for noded input); the output keeps the input
+     * vertices, which are on the grid. Should the input not be noded after all, the overlay fails and the
+     * snap-rounding overlay is used instead.
+     */
+    private Geometry difference(Geometry a, Geometry b) {
+        if (!a.getEnvelopeInternal().intersects(b.getEnvelopeInternal())) {
+            return a;
+        }
+        try {
+            return OverlayNG.overlay(a, b, OverlayNG.DIFFERENCE, ctx.precisionModel(), new SegmentExtractingNoder());
+        } catch (RuntimeException notNoded) {
+            return OverlayNG.overlay(a, b, OverlayNG.DIFFERENCE, ctx.precisionModel());
+        }
     }
 
     private void triangulate(Geometry faces, long iz, boolean up) {
