@@ -35,25 +35,32 @@ final class StackMesher {
     private final VertexTable vertices;
     private final IntList triangles;
     private int wallSplits;
+    private final boolean assumeNoded;
 
-    private StackMesher(GeometryContext ctx, int expectedTriangles) {
+    private StackMesher(GeometryContext ctx, int expectedTriangles, boolean assumeNoded) {
         this.ctx = ctx;
+        this.assumeNoded = assumeNoded;
         this.vertices = new VertexTable(ctx.scale());
         this.triangles = new IntList(3 * expectedTriangles);
     }
 
-    static Mesh mesh(LayeredSolid solid) {
-        return build(solid).mesh;
+    /** Meshes a solid that came out of {@link LayeredSolid#noded()}. */
+    static Mesh meshNoded(LayeredSolid nodedSolid) {
+        return build(nodedSolid, true).mesh;
     }
 
     /** The mesh together with the number of wall splits needed (0 for a fully noded solid). */
     static Result build(LayeredSolid solid) {
+        return build(solid, false);
+    }
+
+    static Result build(LayeredSolid solid, boolean assumeNoded) {
         List<Band> bands = mergeEqual(solid.slabs());
         int points = 0;
         for (Band b : bands) {
             points += b.geometry.getNumPoints();
         }
-        StackMesher m = new StackMesher(solid.context(), 4 * points);
+        StackMesher m = new StackMesher(solid.context(), 4 * points, assumeNoded);
         m.run(bands);
         return new Result(Mesh.ownedCopy(m.vertices.coordinates(), m.triangles.toArray()), m.wallSplits);
     }
@@ -139,21 +146,32 @@ final class StackMesher {
     }
 
     /**
-     * a − b. The slabs of a noded solid are fully noded against each other (every crossing is a vertex of both
-     * rings, coincident edges are equal), so the overlay may skip snap-rounding and take the rings' segments as
-     * they are (JTS SegmentExtractingNoder: the fast path JTS offers for noded input); the output keeps the input
-     * vertices, which are on the grid. Should the input not be noded after all, the overlay fails and the
-     * snap-rounding overlay is used instead.
+     * A − B on the grid. For a noded solid (neighbours already snap-rounded together) the segments are
+     * extracted as they are, skipping a second snap rounding; any failure falls back to the snap-rounding
+     * overlay, and the wall splitting below keeps the mesh closed either way.
      */
     private Geometry difference(Geometry a, Geometry b) {
-        if (!a.getEnvelopeInternal().intersects(b.getEnvelopeInternal())) {
-            return a;
+        if (assumeNoded) {
+            try {
+                Geometry g = OverlayNG.overlay(a, b, OverlayNG.DIFFERENCE, ctx.precisionModel(), new SegmentExtractingNoder());
+                if (onGrid(g)) {
+                    return g;
+                }
+            } catch (RuntimeException e) {
+                // fall through to the robust overlay
+            }
         }
-        try {
-            return OverlayNG.overlay(a, b, OverlayNG.DIFFERENCE, ctx.precisionModel(), new SegmentExtractingNoder());
-        } catch (RuntimeException notNoded) {
-            return OverlayNG.overlay(a, b, OverlayNG.DIFFERENCE, ctx.precisionModel());
+        return OverlayNG.overlay(a, b, OverlayNG.DIFFERENCE, ctx.precisionModel());
+    }
+
+    private boolean onGrid(Geometry g) {
+        double scale = ctx.scale();
+        for (Coordinate c : g.getCoordinates()) {
+            if (Math.rint(c.x * scale) != c.x * scale || Math.rint(c.y * scale) != c.y * scale) {
+                return false;
+            }
         }
+        return true;
     }
 
     private void triangulate(Geometry faces, long iz, boolean up) {

@@ -18,10 +18,9 @@ public final class RuleCatalog {
     public static List<Rule> rules(Profiles profiles) {
         List<Rule> all = new ArrayList<>();
         all.addAll(PrinterRules.rules());
-        // geometry (GEO-) needs the sizing rules' outputs (rotor.diameter, rotor.discs, nozzle.throat-area, ...);
-        // plug both in together:
-        // all.addAll(org.shearstack.rules.geometry.GeometryRules.rules(profiles));
-        // flow sizing (SIZE-): all.addAll(org.shearstack.rules.sizing.SizingRules.rules());
+        // geometry (GEO-) and flow sizing (SIZE-) go in together: geometry reads the sized rotor and nozzle
+        all.addAll(org.shearstack.rules.geometry.GeometryRules.rules(profiles));
+        all.addAll(org.shearstack.rules.sizing.SizingRules.rules());
         return List.copyOf(all);
     }
 

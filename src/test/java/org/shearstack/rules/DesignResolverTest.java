@@ -16,8 +16,10 @@ class DesignResolverTest {
 
     private static final Profiles PROFILES = Profiles.shipped();
 
+    /** The resolver with the printer rules only: these specs have no supply, which the SIZE- rules need. */
     private static ResolvedDesign resolve(String yaml) {
-        return DesignResolver.resolve(SpecReader.read("t.yaml", yaml).orThrow(), PROFILES);
+        return DesignResolver.resolve(SpecReader.read("t.yaml", yaml).orThrow(), PROFILES,
+                Engine.of(PrinterRules.rules()));
     }
 
     @Test

@@ -22,7 +22,26 @@ public final class DynoAnalyzer {
     }
 
     /** Analyses one log. @throws IllegalArgumentException when the log has neither a run-up nor a coast-down */
-    public static DynoResult analyze(SpeedLog log, DynoInputs in) {
+    public static DynoResult analyze(SpeedLog raw, DynoInputs in) {
+        boolean[] spikes = Outliers.find(raw.speedsRadPerS());
+        List<Finding> findings = new ArrayList<>();
+        SpeedLog log = raw;
+        int nSpikes = 0;
+        StringBuilder times = new StringBuilder();
+        for (int i = 0; i < spikes.length; i++) {
+            if (spikes[i]) {
+                if (nSpikes < 10) {
+                    times.append(nSpikes == 0 ? "" : ", ").append(String.format(Locale.ROOT, "%.3f s", raw.timeS(i)));
+                }
+                nSpikes++;
+            }
+        }
+        if (nSpikes > 0) {
+            log = Outliers.without(raw, spikes);
+            findings.add(finding("DYNO-SPIKES", Severity.CAUTION, String.format(Locale.ROOT, "Left out %d single-sample"
+                    + " speed spike(s) far from their neighbours (at %s%s).", nSpikes, times, nSpikes > 10 ? ", …" : ""),
+                    "Check the tachometer's reflective mark and its distance; spikes are missed or doubled pulses."));
+        }
         if (log.size() < MIN_SAMPLES) {
             throw new IllegalArgumentException("the log has " + log.size() + " samples; at least " + MIN_SAMPLES
                     + " are needed");
@@ -32,7 +51,6 @@ public final class DynoAnalyzer {
             throw new IllegalArgumentException("no run-up and no coast-down found: the speed never rises or falls by"
                     + " 30 % of its top value; give them with --run-up/--coast-down START:END (seconds)");
         }
-        List<Finding> findings = new ArrayList<>();
         Map<Segment.Kind, WindowChoice> windows = new EnumMap<>(Segment.Kind.class);
         double inertia = in.inertiaKgM2();
         double top = 0;

@@ -64,14 +64,22 @@ public record TurbineModel(Gas gas, SupplyPath supply, Nozzle nozzle, TurbineGeo
 
     /** No-load speed where the shaft torque falls to zero; 0 when the rotor cannot start. */
     public double runawaySpeedRadPerS() {
+        return runawaySpeedRadPerS(0.0);
+    }
+
+    /**
+     * Speed where the shaft torque falls to a constant extra load torque (a brake, a generator's friction);
+     * 0 when the rotor cannot start against it.
+     */
+    public double runawaySpeedRadPerS(double extraLoadTorqueNm) {
         CoupledSolver solver = new CoupledSolver(this);
         OperatingPoint stall = solver.at(0.0);
-        if (stall.shaftTorqueNm() <= 0.0) {
+        if (stall.shaftTorqueNm() <= extraLoadTorqueNm) {
             return 0.0;
         }
         double a = 0.0;
         double b = Math.max(50.0, 0.5 * stall.jetVelocityMPerS() / geometry.outerRadiusM());
-        while (solver.at(b).shaftTorqueNm() > 0.0) {
+        while (solver.at(b).shaftTorqueNm() > extraLoadTorqueNm) {
             a = b;
             b *= 1.6;
             if (b * geometry.outerRadiusM() > MAX_TIP_SPEED_M_PER_S) {
@@ -80,7 +88,35 @@ public record TurbineModel(Gas gas, SupplyPath supply, Nozzle nozzle, TurbineGeo
             }
         }
         BracketingNthOrderBrentSolver brent = new BracketingNthOrderBrentSolver(1e-10, 1e-6, 1e-12, 5);
-        return brent.solve(200, w -> solver.at(w).shaftTorqueNm(), a, b, AllowedSolution.ANY_SIDE);
+        return brent.solve(200, w -> solver.at(w).shaftTorqueNm() - extraLoadTorqueNm, a, b,
+                AllowedSolution.ANY_SIDE);
+    }
+
+    /**
+     * Highest runaway speed of the uncertainty band (estimate, optimistic and pessimistic readings), with a
+     * constant extra load torque: the figure a safety check must use (physics.md §12.6–§12.8).
+     */
+    public double runawayUpperBoundRadPerS(double extraLoadTorqueNm) {
+        double est = runawaySpeedRadPerS(extraLoadTorqueNm);
+        double opt = withCalibration(calibration.optimistic()).runawaySpeedRadPerS(extraLoadTorqueNm);
+        double pes = withCalibration(calibration.pessimistic()).runawaySpeedRadPerS(extraLoadTorqueNm);
+        return Math.max(est, Math.max(opt, pes));
+    }
+
+    /**
+     * A variant of this design for what-if questions (safety remedies): another supply pressure, the nozzle
+     * throat (and exit) scaled by {@code throatScale}, the disc and exhaust radii scaled by {@code diameterScale}
+     * (exhaust port area with its square; gaps, thicknesses and clearances unchanged).
+     */
+    public TurbineModel variant(double supplyPressurePa, double throatScale, double diameterScale) {
+        TurbineGeometry g = geometry;
+        TurbineGeometry scaled = new TurbineGeometry(g.outerRadiusM() * diameterScale,
+                g.exhaustRadiusM() * diameterScale, g.gapM(), g.discThicknessM(), g.discCount(), g.endClearanceM(),
+                g.rimClearanceM(), g.exhaustAreaM2() * diameterScale * diameterScale, g.jetAngleDeg());
+        Nozzle n = new Nozzle(nozzle.kind(), nozzle.throatAreaM2() * throatScale, nozzle.exitAreaM2() * throatScale,
+                nozzle.dischargeCoefficient(), nozzle.velocityCoefficient());
+        return new TurbineModel(gas, supply.atPressure(supplyPressurePa), n, scaled, losses, calibration, closure,
+                integration, marchSteps);
     }
 
     /** Points at {@code count} evenly spaced speeds from stall to runaway. */

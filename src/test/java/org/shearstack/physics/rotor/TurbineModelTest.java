@@ -121,4 +121,18 @@ class TurbineModelTest {
         ParasiticTorques t = ParasiticLosses.at(100.0, DEMO.geometry(), one, Calibration.nominal(), 1.2, 1.8e-5);
         assertEquals(0.0600e-3, t.bearingLoadNm(), 1e-12);
     }
+
+    @Test
+    void variantsForSafetyRemedies() {
+        double base = DEMO.runawaySpeedRadPerS();
+        double braked = DEMO.runawaySpeedRadPerS(0.005);
+        assertTrue(braked < base);
+        assertEquals(0.005, DEMO.at(braked).shaftTorqueNm(), 1e-6);
+        // a lower supply pressure and a smaller throat both lower the runaway speed
+        double ps = DEMO.supply().supplyPressurePa();
+        assertTrue(DEMO.variant(0.6 * ps, 1.0, 1.0).runawaySpeedRadPerS() < base);
+        assertTrue(DEMO.variant(ps, 0.5, 1.0).runawaySpeedRadPerS() < base);
+        assertEquals(base, DEMO.variant(ps, 1.0, 1.0).runawaySpeedRadPerS(), base * 1e-9);
+        assertTrue(DEMO.runawayUpperBoundRadPerS(0.0) >= base);
+    }
 }
