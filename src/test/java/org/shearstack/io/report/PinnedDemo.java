@@ -31,7 +31,7 @@ public final class PinnedDemo {
         Spec spec = SpecReader.read(SPEC).orThrow();
         Profiles profiles = Profiles.load(Optional.empty());
         List<Rule> rules = new ArrayList<>(PrinterRules.rules());
-        rules.addAll(GeometryRules.rules());
+        rules.addAll(GeometryRules.rules(profiles));
         return DesignJob.run(spec, profiles, Engine.of(rules), new JobOptions(false, false, mapPoints));
     }
 }
