@@ -45,7 +45,7 @@ class SizingRulesTest {
 
     static Engine engine() {
         List<Rule> rules = new ArrayList<>(PrinterRules.rules());
-        rules.addAll(GeometryRules.rules());
+        rules.addAll(GeometryRules.rules(org.shearstack.profile.Profiles.shipped()));
         rules.addAll(SizingRules.rules());
         return Engine.of(rules);
     }
