@@ -29,7 +29,7 @@ import org.shearstack.spec.Dimension;
 class GeometryDemoTest {
 
     static ResolvedDesign demo() {
-        RuleHarness h = TestDesigns.demoInputs().run(GeometryRules.rules());
+        RuleHarness h = TestDesigns.demoInputs().run(GeometryRules.rules(org.shearstack.profile.Profiles.shipped()));
         Map<Key, Double> n = new HashMap<>(h.numbers);
         Map<Key, String> t = new HashMap<>(h.texts);
         n.put(Key.of("supply.pressure", Dimension.PRESSURE), 101_325 + 5e5);
