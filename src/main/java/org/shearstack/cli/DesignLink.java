@@ -4,31 +4,56 @@ import java.nio.file.Path;
 import java.util.Locale;
 import java.util.Optional;
 import org.shearstack.physics.dyno.Prediction;
+import org.shearstack.physics.rotor.TurbineModel;
 
 /**
- * Finds the inertia and predicted torque for a bench run: from the design (rotor parts' mass properties
- * and the performance map) once those are wired, otherwise from the command-line inertia.
+ * What the bench commands need from a design: the inertia of the rotating parts and the performance model.
+ * The lookup from a design folder or spec is a {@link Source}; commands take the inertia from
+ * {@code --inertia} when given.
  */
 final class DesignLink {
     private DesignLink() {
     }
 
-    /** Inertia, where it came from, and an optional prediction. */
-    record Data(double inertiaKgM2, String inertiaSource, Optional<Prediction> prediction) {
+    /**
+     * A design as the bench commands see it.
+     *
+     * @param name              design name for messages
+     * @param rotorInertiaKgM2  inertia of the rotating parts the design generates (NaN when unknown)
+     * @param inertiaSource     how it was obtained
+     * @param model             the performance model, when the design has one
+     */
+    record Design(String name, double rotorInertiaKgM2, String inertiaSource, Optional<TurbineModel> model) {
     }
 
-    static Data load(Path design, Double inertiaKgM2, double extraKgM2) {
+    /** Looks a design up. */
+    interface Source {
+        Design load(Path design);
+    }
+
+    /** Inertia, where it came from, an optional prediction and the model. */
+    record Data(double inertiaKgM2, String inertiaSource, Optional<Prediction> prediction,
+            Optional<TurbineModel> model) {
+    }
+
+    static Data load(Source source, Path design, Double inertiaKgM2, double extraKgM2) {
+        Optional<Design> d = design == null ? Optional.empty() : Optional.of(source.load(design));
+        Optional<TurbineModel> model = d.flatMap(Design::model);
+        Optional<Prediction> prediction = model.map(m -> new Prediction(w -> m.at(w).shaftTorqueNm(),
+                Prediction.Basis.SHAFT, "performance model of " + d.get().name()));
+        String extra = extraKgM2 > 0 ? String.format(Locale.ROOT, " + --extra-inertia %.4g kg*m^2", extraKgM2) : "";
         if (inertiaKgM2 != null) {
-            double total = inertiaKgM2 + extraKgM2;
-            return new Data(total, String.format(Locale.ROOT, "--inertia %.4g kg*m^2%s", inertiaKgM2,
-                    extraKgM2 > 0 ? String.format(Locale.ROOT, " + --extra-inertia %.4g kg*m^2", extraKgM2) : ""),
-                    Optional.empty());
+            return new Data(inertiaKgM2 + extraKgM2, String.format(Locale.ROOT, "--inertia %.4g kg*m^2%s",
+                    inertiaKgM2, extra), prediction, model);
         }
-        if (design == null) {
+        if (d.isEmpty()) {
             throw new IllegalArgumentException("the rotor inertia is unknown: give --design DIR|SPEC or --inertia"
                     + " (kg*m^2, e.g. 9.7e-5 or '97 kg*mm^2')");
         }
-        throw new IllegalArgumentException("--design " + design + ": reading the rotor inertia from a design is not"
-                + " available in this build yet; give --inertia (kg*m^2)");
+        if (!(d.get().rotorInertiaKgM2() > 0)) {
+            throw new IllegalArgumentException("--design " + design + ": " + d.get().inertiaSource()
+                    + "; give --inertia (kg*m^2)");
+        }
+        return new Data(d.get().rotorInertiaKgM2() + extraKgM2, d.get().inertiaSource() + extra, prediction, model);
     }
 }

@@ -41,6 +41,24 @@ public final class DynoCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
+    @picocli.CommandLine.Mixin
+    ProfileOptions profileOptions;
+
+    private final DesignLink.Source designs;
+
+    /** The command as the command line builds it: designs are resolved from their spec. */
+    public DynoCommand() {
+        this(null);
+    }
+
+    DynoCommand(DesignLink.Source designs) {
+        this.designs = designs;
+    }
+
+    private DesignLink.Source designs() {
+        return designs != null ? designs : new SpecDesigns(profileOptions.load());
+    }
+
     @Parameters(index = "0", paramLabel = "LOG.csv", description = "Speed log: time, speed, optional voltage and current.")
     Path log;
 
@@ -96,7 +114,13 @@ public final class DynoCommand implements Callable<Integer> {
                 err.println(log + ": cannot read: " + e.getMessage());
                 return EXIT_BAD_INPUT;
             }
-            DesignLink.Data d = DesignLink.load(design, inertiaKgM2, extraInertiaKgM2);
+            DesignLink.Data d;
+            try {
+                d = DesignLink.load(design == null ? null : designs(), design, inertiaKgM2, extraInertiaKgM2);
+            } catch (IllegalArgumentException e) {
+                err.println(e.getMessage());
+                return EXIT_BAD_INPUT;
+            }
             DynoInputs in = new DynoInputs(d.inertiaKgM2(),
                     Optional.ofNullable(runUp).map(r -> range("--run-up", r)),
                     Optional.ofNullable(coastDown).map(r -> range("--coast-down", r)),

@@ -14,11 +14,15 @@ import picocli.CommandLine.Model.CommandSpec;
         description = "Design, check and generate printable multiple-disc (boundary-layer) air turbines.",
         footer = {"", "Exit codes: 0 ok, 1 internal error, 2 bad input (nothing written), 3 design produced but a check FAILED."},
         subcommands = {
+            DesignCommand.class,
             ExplainCommand.class,
             ProfilesCommand.class,
             DynoCommand.class,
+            CalibrateCommand.class,
             ViewCommand.class,
             SupplyCommand.class,
+            CheckCommand.class,
+            FamilyCommand.class,
             // design, check, supply, family, dyno, view, calibrate, bench: add their classes here
             AutoComplete.GenerateCompletion.class,
         })

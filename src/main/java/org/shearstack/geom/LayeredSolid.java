@@ -126,7 +126,7 @@ public final class LayeredSolid {
         if (!this.ctx.equals(ctx)) {
             throw new IllegalArgumentException("toMesh: context " + ctx + " differs from the solid's " + this.ctx);
         }
-        return StackMesher.mesh(noded());
+        return StackMesher.meshNoded(noded());
     }
 
     @Override

@@ -8,6 +8,7 @@ import org.locationtech.jts.geom.Coordinate;
 import org.locationtech.jts.geom.Geometry;
 import org.locationtech.jts.geom.LineString;
 import org.locationtech.jts.geom.Polygon;
+import org.locationtech.jts.noding.SegmentExtractingNoder;
 import org.locationtech.jts.operation.overlayng.OverlayNG;
 import org.locationtech.jts.triangulate.polygon.PolygonTriangulator;
 import org.locationtech.jts.triangulate.tri.Tri;
@@ -34,25 +35,32 @@ final class StackMesher {
     private final VertexTable vertices;
     private final IntList triangles;
     private int wallSplits;
+    private final boolean assumeNoded;
 
-    private StackMesher(GeometryContext ctx, int expectedTriangles) {
+    private StackMesher(GeometryContext ctx, int expectedTriangles, boolean assumeNoded) {
         this.ctx = ctx;
+        this.assumeNoded = assumeNoded;
         this.vertices = new VertexTable(ctx.scale());
         this.triangles = new IntList(3 * expectedTriangles);
     }
 
-    static Mesh mesh(LayeredSolid solid) {
-        return build(solid).mesh;
+    /** Meshes a solid that came out of {@link LayeredSolid#noded()}. */
+    static Mesh meshNoded(LayeredSolid nodedSolid) {
+        return build(nodedSolid, true).mesh;
     }
 
     /** The mesh together with the number of wall splits needed (0 for a fully noded solid). */
     static Result build(LayeredSolid solid) {
+        return build(solid, false);
+    }
+
+    static Result build(LayeredSolid solid, boolean assumeNoded) {
         List<Band> bands = mergeEqual(solid.slabs());
         int points = 0;
         for (Band b : bands) {
             points += b.geometry.getNumPoints();
         }
-        StackMesher m = new StackMesher(solid.context(), 4 * points);
+        StackMesher m = new StackMesher(solid.context(), 4 * points, assumeNoded);
         m.run(bands);
         return new Result(Mesh.ownedCopy(m.vertices.coordinates(), m.triangles.toArray()), m.wallSplits);
     }
@@ -87,31 +95,51 @@ final class StackMesher {
                 && a.equalsNorm(b);
     }
 
+    private record Interface(double z, Geometry below, Geometry above) {
+    }
+
+    /** One interface's faces (triangles as grid points, winding fixed) and its node index. */
+    private record Faces(long iz, List<Coordinate[]> triangles, NodeIndex nodes) {
+    }
+
     private void run(List<Band> bands) {
         int n = bands.size();
-        NodeIndex[] below = new NodeIndex[n];
-        NodeIndex[] above = new NodeIndex[n];
+        List<Interface> interfaces = new ArrayList<>();
+        int[] below = new int[n];
+        int[] above = new int[n];
         for (int i = 0; i < n; i++) {
             Band b = bands.get(i);
             if (i == 0 || bands.get(i - 1).z1 != b.z0) {
-                below[i] = face(b.z0, null, b.geometry);
+                below[i] = interfaces.size();
+                interfaces.add(new Interface(b.z0, null, b.geometry));
             }
             Band next = i + 1 < n ? bands.get(i + 1) : null;
+            above[i] = interfaces.size();
             if (next != null && next.z0 == b.z1) {
-                NodeIndex shared = face(b.z1, b.geometry, next.geometry);
-                above[i] = shared;
-                below[i + 1] = shared;
+                below[i + 1] = interfaces.size();
+                interfaces.add(new Interface(b.z1, b.geometry, next.geometry));
             } else {
-                above[i] = face(b.z1, b.geometry, null);
+                interfaces.add(new Interface(b.z1, b.geometry, null));
+            }
+        }
+        // interfaces are independent: compute them in parallel, then emit in order, so the output (vertex
+        // and triangle order) is the same as a sequential run
+        List<Faces> faces = java.util.stream.IntStream.range(0, interfaces.size()).parallel()
+                .mapToObj(k -> faces(interfaces.get(k))).toList();
+        for (Faces f : faces) {
+            for (Coordinate[] t : f.triangles) {
+                triangles.add(vertex(t[0], f.iz), vertex(t[1], f.iz), vertex(t[2], f.iz));
             }
         }
         for (int i = 0; i < n; i++) {
-            walls(bands.get(i), below[i], above[i]);
+            walls(bands.get(i), faces.get(below[i]).nodes, faces.get(above[i]).nodes);
         }
     }
 
-    /** Builds the up and down faces at height z and returns the interface's node index. */
-    private NodeIndex face(double z, Geometry a, Geometry b) {
+    /** The up and down faces at one interface, and its node index. */
+    private Faces faces(Interface in) {
+        Geometry a = in.below;
+        Geometry b = in.above;
         Geometry up;
         Geometry down;
         if (a == null) {
@@ -121,8 +149,8 @@ final class StackMesher {
             up = a;
             down = null;
         } else {
-            up = OverlayNG.overlay(a, b, OverlayNG.DIFFERENCE, ctx.precisionModel());
-            down = OverlayNG.overlay(b, a, OverlayNG.DIFFERENCE, ctx.precisionModel());
+            up = difference(a, b);
+            down = difference(b, a);
         }
         NodeIndex nodes = new NodeIndex(ctx.scale());
         nodes.addAll(a);
@@ -131,13 +159,44 @@ final class StackMesher {
             nodes.addAll(up);
             nodes.addAll(down);
         }
-        long iz = ctx.gridIndex(z);
-        triangulate(up, iz, true);
-        triangulate(down, iz, false);
-        return nodes;
+        nodes.build();
+        List<Coordinate[]> tris = new ArrayList<>();
+        triangulate(up, true, tris);
+        triangulate(down, false, tris);
+        return new Faces(ctx.gridIndex(in.z), tris, nodes);
     }
 
-    private void triangulate(Geometry faces, long iz, boolean up) {
+    /**
+     * A − B on the grid. For a noded solid (neighbours already snap-rounded together) the segments are
+     * extracted as they are, skipping a second snap rounding; any failure falls back to the snap-rounding
+     * overlay, and the wall splitting below keeps the mesh closed either way.
+     */
+    private Geometry difference(Geometry a, Geometry b) {
+        if (assumeNoded) {
+            try {
+                Geometry g = OverlayNG.overlay(a, b, OverlayNG.DIFFERENCE, ctx.precisionModel(), new SegmentExtractingNoder());
+                if (onGrid(g)) {
+                    return g;
+                }
+            } catch (RuntimeException e) {
+                // fall through to the robust overlay
+            }
+        }
+        return OverlayNG.overlay(a, b, OverlayNG.DIFFERENCE, ctx.precisionModel());
+    }
+
+    private boolean onGrid(Geometry g) {
+        double scale = ctx.scale();
+        for (Coordinate c : g.getCoordinates()) {
+            if (Math.rint(c.x * scale) != c.x * scale || Math.rint(c.y * scale) != c.y * scale) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    /** Triangles of each face polygon from its boundary vertices, wound CCW seen from above if up, else CW. */
+    private static void triangulate(Geometry faces, boolean up, List<Coordinate[]> out) {
         if (faces == null || faces.isEmpty()) {
             return;
         }
@@ -151,14 +210,7 @@ final class StackMesher {
                 Coordinate p1 = t.getCoordinate(1);
                 Coordinate p2 = t.getCoordinate(2);
                 double cross = (p1.x - p0.x) * (p2.y - p0.y) - (p1.y - p0.y) * (p2.x - p0.x);
-                int i0 = vertex(p0, iz);
-                int i1 = vertex(p1, iz);
-                int i2 = vertex(p2, iz);
-                if ((cross > 0) == up) {
-                    triangles.add(i0, i1, i2);
-                } else {
-                    triangles.add(i0, i2, i1);
-                }
+                out.add((cross > 0) == up ? new Coordinate[] {p0, p1, p2} : new Coordinate[] {p0, p2, p1});
             }
         }
     }

@@ -2,6 +2,7 @@ package org.shearstack.geom;
 
 import java.util.ArrayList;
 import java.util.Collection;
+import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 
@@ -48,7 +49,7 @@ final class StackNoder {
         }
         for (int round = 0; round < MAX_ROUNDS; round++) {
             NodeResult r = nodeOnce(ctx, regions);
-            List<Geometry> opened = ContactResolver.open(ctx, r.regions, z0, z1);
+            List<Geometry> opened = ContactResolver.open(ctx, r.regions, z0, z1, round);
             regions = opened;
             if (!r.repaired && opened == r.regions) {
                 break;
@@ -72,8 +73,20 @@ final class StackNoder {
     private record RingId(int slab, int polygon, int ring) {
     }
 
+    private record Segment(double ax, double ay, double bx, double by) {
+    }
+
+    private static int compare(Coordinate a, Coordinate b) {
+        int c = Double.compare(a.x, b.x);
+        return c != 0 ? c : Double.compare(a.y, b.y);
+    }
+
     private static NodeResult nodeOnce(GeometryContext ctx, List<Geometry> regions) {
+        // Node each distinct segment once: slabs repeat most of their neighbours' rings, and noding the
+        // repeated copies together would be quadratic in the number of slabs.
+        Map<Segment, Integer> segmentIds = new HashMap<>();
         List<SegmentString> input = new ArrayList<>();
+        Map<RingId, int[]> ringSegments = new HashMap<>();
         for (int s = 0; s < regions.size(); s++) {
             Geometry g = regions.get(s);
             for (int p = 0; p < g.getNumGeometries(); p++) {
@@ -81,9 +94,23 @@ final class StackNoder {
                 if (poly.isEmpty()) {
                     continue;
                 }
-                input.add(new NodedSegmentString(poly.getExteriorRing().getCoordinates(), new RingId(s, p, 0)));
-                for (int h = 0; h < poly.getNumInteriorRing(); h++) {
-                    input.add(new NodedSegmentString(poly.getInteriorRingN(h).getCoordinates(), new RingId(s, p, h + 1)));
+                for (int h = 0; h <= poly.getNumInteriorRing(); h++) {
+                    Coordinate[] cs = (h == 0 ? poly.getExteriorRing() : poly.getInteriorRingN(h - 1)).getCoordinates();
+                    int[] ids = new int[cs.length - 1];
+                    for (int i = 0; i + 1 < cs.length; i++) {
+                        boolean forward = compare(cs[i], cs[i + 1]) < 0;
+                        Coordinate a = forward ? cs[i] : cs[i + 1];
+                        Coordinate b = forward ? cs[i + 1] : cs[i];
+                        Segment key = new Segment(a.x, a.y, b.x, b.y);
+                        Integer id = segmentIds.get(key);
+                        if (id == null) {
+                            id = input.size();
+                            segmentIds.put(key, id);
+                            input.add(new NodedSegmentString(new Coordinate[] {a.copy(), b.copy()}, id));
+                        }
+                        ids[i] = forward ? id : ~id;
+                    }
+                    ringSegments.put(new RingId(s, p, h), ids);
                 }
             }
         }
@@ -91,15 +118,32 @@ final class StackNoder {
         noder.computeNodes(input);
         @SuppressWarnings("unchecked")
         Collection<SegmentString> pieces = noder.getNodedSubstrings();
-        Map<Object, List<Coordinate>> rings = new java.util.HashMap<>();
+        List<List<Coordinate>> noded = new ArrayList<>(input.size());
+        for (int i = 0; i < input.size(); i++) {
+            noded.add(new ArrayList<>(2));
+        }
         for (SegmentString piece : pieces) {
-            List<Coordinate> ring = rings.computeIfAbsent(piece.getData(), k -> new ArrayList<>());
-            Coordinate[] cs = piece.getCoordinates();
-            for (int i = 0; i < cs.length; i++) {
-                if (ring.isEmpty() || !ring.get(ring.size() - 1).equals2D(cs[i])) {
-                    ring.add(cs[i]);
+            List<Coordinate> path = noded.get((Integer) piece.getData());
+            for (Coordinate c : piece.getCoordinates()) {
+                if (path.isEmpty() || !path.get(path.size() - 1).equals2D(c)) {
+                    path.add(c);
                 }
             }
+        }
+        Map<RingId, List<Coordinate>> rings = new HashMap<>();
+        for (Map.Entry<RingId, int[]> e : ringSegments.entrySet()) {
+            List<Coordinate> ring = new ArrayList<>();
+            for (int code : e.getValue()) {
+                List<Coordinate> path = noded.get(code >= 0 ? code : ~code);
+                int n = path.size();
+                for (int k = 0; k < n; k++) {
+                    Coordinate c = path.get(code >= 0 ? k : n - 1 - k);
+                    if (ring.isEmpty() || !ring.get(ring.size() - 1).equals2D(c)) {
+                        ring.add(c);
+                    }
+                }
+            }
+            rings.put(e.getKey(), ring);
         }
         GeometryFactory f = ctx.factory();
         List<Geometry> out = new ArrayList<>();

@@ -169,6 +169,9 @@ public final class SpecReader {
                     problems.add(located(file, keyNode, path, "each key once", "a second " + path, ""));
                     continue;
                 }
+                if (path.equals(SpecSchema.FAMILY_SECTION)) {
+                    continue; // read by FamilySection
+                }
                 if (SpecSchema.field(path).isPresent()) {
                     if (valueNode instanceof ScalarNode) {
                         scalars.put(path, valueNode);

@@ -22,6 +22,12 @@ public final class SpecSchema {
     /** Standard atmosphere, ISO 2533:1975: 101 325 Pa. Default ambient pressure. */
     public static final double STANDARD_ATMOSPHERE_PA = 101_325.0;
 
+    /**
+     * The top-level section that describes a family of variants ({@link FamilySection}). The spec reader
+     * leaves it to {@link FamilySection#read}; a single design ignores it.
+     */
+    public static final String FAMILY_SECTION = "family";
+
     private static final double BAR = 1e5;
     private static final String PROFILE_NAME = "[A-Za-z0-9][A-Za-z0-9._/\\\\:-]*";
     private static final Map<String, SpecField> FIELDS = build();
@@ -203,6 +209,7 @@ public final class SpecSchema {
     public static Set<String> writablePaths() {
         Set<String> s = new TreeSet<>(FIELDS.keySet());
         s.addAll(SECTIONS);
+        s.add(FAMILY_SECTION);
         return s;
     }
 

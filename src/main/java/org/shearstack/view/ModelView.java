@@ -202,8 +202,12 @@ final class ModelView {
     }
 
     private boolean isDimmed(String part) {
-        return highlighted.isPresent() && !highlighted.get().part().isEmpty()
-                && parts.containsKey(highlighted.get().part()) && !highlighted.get().part().equals(part);
+        if (highlighted.isEmpty()) {
+            return false;
+        }
+        String target = highlighted.get().part();
+        boolean anyMatch = parts.values().stream().anyMatch(p -> p.part().isCopyOf(target));
+        return anyMatch && !parts.get(part).part().isCopyOf(target);
     }
 
     private void placeMarker() {
@@ -218,7 +222,7 @@ final class ModelView {
 
     /** Where a finding's location is drawn, model frame relative to the origin, or empty when it has no place. */
     Optional<double[]> markerPosition(Finding f) {
-        PartNode p = parts.get(f.part());
+        PartNode p = parts.values().stream().filter(n -> n.part().isCopyOf(f.part())).findFirst().orElse(null);
         if (p == null || !f.where().isKnown()) {
             return Optional.empty();
         }

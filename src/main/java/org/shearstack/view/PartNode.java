@@ -118,11 +118,33 @@ final class PartNode {
     }
 
     private SectionResult cut() {
-        if (part.sectionMesh().isPresent()) {
-            Mesh prepared = part.sectionMesh().get();
-            return new SectionResult(prepared, Mesh.of(prepared.vertexArray(), new int[0]), "");
+        if (part.section().isPresent()) {
+            return splitCutFace(part.section().get().keptHalf());
         }
         return MeshSection.keepPositiveY(placed);
+    }
+
+    /** Separates the triangles lying in the cut plane (drawn in the cut tint) from the rest. */
+    static SectionResult splitCutFace(Mesh half) {
+        int[] tri = half.triangleArray();
+        int[] body = new int[tri.length];
+        int[] cap = new int[tri.length];
+        int nb = 0;
+        int nc = 0;
+        for (int t = 0; t < tri.length; t += 3) {
+            boolean inPlane = half.y(tri[t]) == 0 && half.y(tri[t + 1]) == 0 && half.y(tri[t + 2]) == 0;
+            int[] into = inPlane ? cap : body;
+            int at = inPlane ? nc : nb;
+            System.arraycopy(tri, t, into, at, 3);
+            if (inPlane) {
+                nc += 3;
+            } else {
+                nb += 3;
+            }
+        }
+        double[] xyz = half.vertexArray();
+        return new SectionResult(Mesh.of(xyz, java.util.Arrays.copyOf(body, nb)),
+                Mesh.of(xyz, java.util.Arrays.copyOf(cap, nc)), "");
     }
 
     static MeshView meshView(FxMeshArrays arrays, PhongMaterial material) {

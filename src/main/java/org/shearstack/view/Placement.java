@@ -40,6 +40,13 @@ public record Placement(
         return new Placement(m[0], m[3], m[6], m[1], m[4], m[7], m[2], m[5], m[8], m[9], m[10], m[11]);
     }
 
+    /** From a kernel transform (3x4 matrix [A | t]). */
+    public static Placement of(org.shearstack.geom.Transform t) {
+        return new Placement(t.element(0, 0), t.element(0, 1), t.element(0, 2), t.element(1, 0), t.element(1, 1),
+                t.element(1, 2), t.element(2, 0), t.element(2, 1), t.element(2, 2), t.element(0, 3), t.element(1, 3),
+                t.element(2, 3));
+    }
+
     /** The image of point (x, y, z). */
     public double[] apply(double xMm, double yMm, double zMm) {
         return new double[] {

@@ -6,7 +6,7 @@ import java.util.Locale;
 import org.shearstack.profile.Profiles;
 
 /**
- * Chooses how to read what the user named: a spec (.yaml, .yml), a kit folder, a 3MF file.
+ * Chooses how to read what the user named: a spec (.yaml, .yml), a kit folder, a 3MF or STL file.
  */
 public final class SceneSources {
 
@@ -24,18 +24,14 @@ public final class SceneSources {
                     + "at that path");
         }
         String name = String.valueOf(path.getFileName()).toLowerCase(Locale.ROOT);
-        if (Files.isDirectory(path)) {
-            throw new SceneLoadException(path + ": reading a kit folder is not available in this version yet; "
-                    + "view the spec that made it instead");
+        if (Files.isDirectory(path) || name.endsWith(".3mf") || name.endsWith(".stl")) {
+            return MeshFileSource.of(path);
         }
         if (name.endsWith(".yaml") || name.endsWith(".yml")) {
-            return SpecSceneSource.of(path, profiles, DesignScenes::withoutParts);
+            return SpecSceneSource.of(path, profiles, DesignScenes::fromDesign);
         }
-        if (name.endsWith(".3mf")) {
-            throw new SceneLoadException(path + ": reading 3MF files is not available in this version yet");
-        }
-        throw new SceneLoadException(path + ": expected a spec (.yaml or .yml), a kit folder or a .3mf file, found '"
-                + path.getFileName() + "'");
+        throw new SceneLoadException(path + ": expected a spec (.yaml or .yml), a kit folder, a .3mf or .stl file, "
+                + "found '" + path.getFileName() + "'");
     }
 
     /** The built-in sample assembly. */

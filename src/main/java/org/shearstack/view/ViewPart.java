@@ -12,11 +12,11 @@ import org.shearstack.geom.Mesh;
  * @param colour          display colour
  * @param placement       where the part sits in the assembly
  * @param explodedOffset  displacement at full explosion (slider at 1)
- * @param sectionMesh     the part's assembled-frame half kept by the section cut, closed, when the
- *                        producer built it from the layered solid; empty to let the viewer slice the mesh
+ * @param section         makes the part's section from its exact model (the layered solid); empty to let
+ *                        the viewer cut the mesh itself
  */
 public record ViewPart(String name, Mesh mesh, Rgb colour, Placement placement, OffsetMm explodedOffset,
-        Optional<Mesh> sectionMesh) {
+        Optional<SectionMaker> section) {
 
     public ViewPart {
         Objects.requireNonNull(name, "name");
@@ -24,7 +24,7 @@ public record ViewPart(String name, Mesh mesh, Rgb colour, Placement placement, 
         Objects.requireNonNull(colour, "colour");
         Objects.requireNonNull(placement, "placement");
         Objects.requireNonNull(explodedOffset, "explodedOffset");
-        Objects.requireNonNull(sectionMesh, "sectionMesh");
+        Objects.requireNonNull(section, "section");
         if (name.isBlank()) {
             throw new IllegalArgumentException("part name: expected a non-blank name, found '" + name + "'");
         }
@@ -35,12 +35,22 @@ public record ViewPart(String name, Mesh mesh, Rgb colour, Placement placement, 
         return new ViewPart(name, mesh, colour, placement, explodedOffset, Optional.empty());
     }
 
+    /** The same part with its section made by {@code maker}. */
+    public ViewPart withSection(SectionMaker maker) {
+        return new ViewPart(name, mesh, colour, placement, explodedOffset, Optional.of(maker));
+    }
+
+    /** True when this part is the finding part {@code findingPart} or one of its numbered copies ("disc #3"). */
+    public boolean isCopyOf(String findingPart) {
+        return !findingPart.isEmpty() && (name.equals(findingPart) || name.startsWith(findingPart + " #"));
+    }
+
     /** The mesh in the assembly frame. */
     public Mesh placedMesh() {
         return placement.apply(mesh);
     }
 
     public ViewPart withExplodedOffset(OffsetMm offset) {
-        return new ViewPart(name, mesh, colour, placement, offset, sectionMesh);
+        return new ViewPart(name, mesh, colour, placement, offset, section);
     }
 }

@@ -20,7 +20,7 @@ class StackPropertyTest {
         for (long seed = 1; seed <= CASES; seed++) {
             LayeredSolid solid = new RandomStacks(ctx, seed).stack();
             LayeredSolid noded = solid.noded();
-            StackMesher.Result built = StackMesher.build(noded);
+            StackMesher.Result built = StackMesher.build(noded, true);
             MeshReport r = MeshCheck.validate(built.mesh());
             String where = "seed " + seed + ": " + solid + ": " + r.summary();
             assertTrue(r.isValidSolid(), where);

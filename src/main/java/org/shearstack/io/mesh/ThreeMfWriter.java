@@ -44,7 +44,7 @@ public final class ThreeMfWriter {
 
     public static void write(ThreeMfModel model, OutputStream out) throws IOException {
         ZipOutputStream zip = new ZipOutputStream(new NonClosing(out), StandardCharsets.UTF_8);
-        zip.setLevel(Deflater.DEFAULT_COMPRESSION);
+        zip.setLevel(Deflater.BEST_SPEED); // fixed level: same bytes on every run
         boolean thumb = model.thumbnailPng() != null;
         entry(zip, "[Content_Types].xml");
         text(zip, contentTypes(thumb));
@@ -181,21 +181,70 @@ public final class ThreeMfWriter {
 
     private static void writeMesh(Mesh mesh, Writer w) throws IOException {
         w.write("   <mesh>\n    <vertices>\n");
-        StringBuilder sb = new StringBuilder(96);
+        StringBuilder sb = new StringBuilder(1 << 16);
         for (int v = 0; v < mesh.vertexCount(); v++) {
-            sb.setLength(0);
-            sb.append("     <vertex x=\"").append(number(mesh.x(v))).append("\" y=\"").append(number(mesh.y(v)))
-                    .append("\" z=\"").append(number(mesh.z(v))).append("\"/>\n");
-            w.append(sb);
+            sb.append("     <vertex x=\"");
+            appendNumber(sb, mesh.x(v));
+            sb.append("\" y=\"");
+            appendNumber(sb, mesh.y(v));
+            sb.append("\" z=\"");
+            appendNumber(sb, mesh.z(v));
+            sb.append("\"/>\n");
+            if (sb.length() > 60_000) {
+                w.append(sb);
+                sb.setLength(0);
+            }
         }
-        w.write("    </vertices>\n    <triangles>\n");
+        sb.append("    </vertices>\n    <triangles>\n");
         for (int t = 0; t < mesh.triangleCount(); t++) {
-            sb.setLength(0);
             sb.append("     <triangle v1=\"").append(mesh.corner(t, 0)).append("\" v2=\"").append(mesh.corner(t, 1))
                     .append("\" v3=\"").append(mesh.corner(t, 2)).append("\"/>\n");
-            w.append(sb);
+            if (sb.length() > 60_000) {
+                w.append(sb);
+                sb.setLength(0);
+            }
         }
+        w.append(sb);
         w.write("    </triangles>\n   </mesh>\n");
+    }
+
+    private static final int DYADIC_BITS = 16;
+    private static final long DYADIC_SCALE = 1L << DYADIC_BITS;
+    private static final long FIVE_POW_16 = 152_587_890_625L;
+
+    /**
+     * Appends {@link #number(double)}'s text. Values on a dyadic grid of 2^-16 (the kernel's grids included)
+     * are written as their exact decimal expansion without going through Double.toString; it reads back to
+     * the same double.
+     */
+    static void appendNumber(StringBuilder sb, double v) {
+        double scaled = v * DYADIC_SCALE;
+        if (scaled == Math.rint(scaled) && Math.abs(scaled) < 1e15) {
+            long k = (long) scaled;
+            if (k < 0) {
+                sb.append('-');
+                k = -k;
+            }
+            long whole = k >>> DYADIC_BITS;
+            long frac = k & (DYADIC_SCALE - 1);
+            sb.append(whole);
+            if (frac != 0) {
+                // frac / 2^16 = frac * 5^16 / 10^16: exactly 16 decimal digits, trailing zeros dropped
+                String d = Long.toString(frac * FIVE_POW_16);
+                int pad = DYADIC_BITS - d.length();
+                int end = d.length();
+                while (end > 0 && d.charAt(end - 1) == '0') {
+                    end--;
+                }
+                sb.append('.');
+                for (int i = 0; i < pad; i++) {
+                    sb.append('0');
+                }
+                sb.append(d, 0, end);
+            }
+            return;
+        }
+        sb.append(number(v));
     }
 
     private static String transformAttribute(Transform t) {

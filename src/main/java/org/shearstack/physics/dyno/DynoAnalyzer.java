@@ -22,7 +22,26 @@ public final class DynoAnalyzer {
     }
 
     /** Analyses one log. @throws IllegalArgumentException when the log has neither a run-up nor a coast-down */
-    public static DynoResult analyze(SpeedLog log, DynoInputs in) {
+    public static DynoResult analyze(SpeedLog raw, DynoInputs in) {
+        boolean[] spikes = Outliers.find(raw.speedsRadPerS());
+        List<Finding> findings = new ArrayList<>();
+        SpeedLog log = raw;
+        int nSpikes = 0;
+        StringBuilder times = new StringBuilder();
+        for (int i = 0; i < spikes.length; i++) {
+            if (spikes[i]) {
+                if (nSpikes < 10) {
+                    times.append(nSpikes == 0 ? "" : ", ").append(String.format(Locale.ROOT, "%.3f s", raw.timeS(i)));
+                }
+                nSpikes++;
+            }
+        }
+        if (nSpikes > 0) {
+            log = Outliers.without(raw, spikes);
+            findings.add(finding("DYNO-SPIKES", Severity.CAUTION, String.format(Locale.ROOT, "Left out %d single-sample"
+                    + " speed spike(s) far from their neighbours (at %s%s).", nSpikes, times, nSpikes > 10 ? ", …" : ""),
+                    "Check the tachometer's reflective mark and its distance; spikes are missed or doubled pulses."));
+        }
         if (log.size() < MIN_SAMPLES) {
             throw new IllegalArgumentException("the log has " + log.size() + " samples; at least " + MIN_SAMPLES
                     + " are needed");
@@ -32,7 +51,6 @@ public final class DynoAnalyzer {
             throw new IllegalArgumentException("no run-up and no coast-down found: the speed never rises or falls by"
                     + " 30 % of its top value; give them with --run-up/--coast-down START:END (seconds)");
         }
-        List<Finding> findings = new ArrayList<>();
         Map<Segment.Kind, WindowChoice> windows = new EnumMap<>(Segment.Kind.class);
         double inertia = in.inertiaKgM2();
         double top = 0;
@@ -133,7 +151,7 @@ public final class DynoAnalyzer {
     }
 
     /** Smoothed speed and slope of one segment. */
-    record Fitted(double[] t, double[] w, double[] a, WindowChoice window) {
+    record Fitted(double[] t, double[] w, double[] a, WindowChoice window, int[] perSample) {
     }
 
     private static Fitted smooth(SpeedLog log, Segment s, DynoInputs in, Map<Segment.Kind, WindowChoice> windows) {
@@ -146,9 +164,17 @@ public final class DynoAnalyzer {
             throw new IllegalArgumentException("the " + s.kind().label() + " has " + t.length
                     + " samples, fewer than the window of " + wc.points());
         }
-        windows.put(s.kind(), wc);
         SavitzkyGolay.Smoothed sm = SavitzkyGolay.apply(t, w, wc.points(), wc.order());
-        return new Fitted(t, sm.value(), sm.perSecond(), wc);
+        int[] perSample = new int[t.length];
+        java.util.Arrays.fill(perSample, wc.points());
+        if (in.windowPoints().isEmpty()) {
+            WindowChoice.Local local = WindowChoice.local(wc, t, w, sm.perSecond(), s.kind().label());
+            wc = local.choice();
+            perSample = local.windows();
+            sm = SavitzkyGolay.apply(t, w, perSample, wc.order());
+        }
+        windows.put(s.kind(), wc);
+        return new Fitted(t, sm.value(), sm.perSecond(), wc, perSample);
     }
 
     static Finding finding(String code, Severity sev, String message, String remedy) {

@@ -169,6 +169,22 @@ class ThreeMfTest {
         assertEquals(25.4, m.objects().get(0).mesh().x(1), 0.0); // 1 in = 25.4 mm exactly (NIST SP 811, 2008)
     }
 
+    @Test
+    void numbersAreExactLocaleFreeDecimals() {
+        double[] values = {0, -0.0, 1, -1, 0.5, 1.0 / 2048, -1234.5678, 7.25, 1e-9, 123456.789, 0.1, -3.0 / 65536};
+        for (double v : values) {
+            StringBuilder sb = new StringBuilder();
+            ThreeMfWriter.appendNumber(sb, v);
+            String text = sb.toString();
+            assertEquals(v + 0.0, Double.parseDouble(text), 0.0, text);
+            assertTrue(text.matches("-?[0-9]+(\\.[0-9]+)?([eE]-?[0-9]+)?"), text);
+            assertFalse(text.startsWith("-0") && Double.parseDouble(text) == 0, text);
+        }
+        StringBuilder sb = new StringBuilder();
+        ThreeMfWriter.appendNumber(sb, 1.0 / 2048);
+        assertEquals("0.00048828125", sb.toString());
+    }
+
     /** A minimal package with the given model entry name, relationships pointing at it. */
     static byte[] pkg(String modelEntry, String xml) throws Exception {
         ByteArrayOutputStream out = new ByteArrayOutputStream();

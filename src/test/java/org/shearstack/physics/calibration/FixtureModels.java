@@ -13,15 +13,15 @@ import org.shearstack.physics.supply.SupplyPath;
  * Invented demo-sized turbines and the "true" coefficients behind the synthetic bench logs in
  * tests-fixtures/bench/ (not measured turbines).
  */
-final class FixtureModels {
+public final class FixtureModels {
     /** Rotor, hub, shaft and generator rotor together (invented). */
-    static final double INERTIA_KG_M2 = 5.0e-5;
+    public static final double INERTIA_KG_M2 = 5.0e-5;
 
     private FixtureModels() {
     }
 
     /** 80 mm discs, 0.4 mm gaps, 6 bar(g) supply; bearings sealed or shielded. Prior calibration: nominal. */
-    static TurbineModel model(boolean sealed) {
+    public static TurbineModel model(boolean sealed) {
         SupplyPath supply = new SupplyPath(7.013e5, 293.15, 1.013e5, FlowCharacteristic.ofDm3PerSBar(0.6, 0.3));
         Nozzle nozzle = Nozzle.converging(Math.PI * 0.001 * 0.001, 0.9, 0.95);
         TurbineGeometry geometry = new TurbineGeometry(0.040, 0.012, 0.0004, 0.00075, 10, 0.001, 0.001,
@@ -31,12 +31,12 @@ final class FixtureModels {
     }
 
     /** Truth of fixture "sealed-run": rim-struck flow does no work, more windage, weaker grease drag, sealed. */
-    static Calibration sealedTruth() {
+    public static Calibration sealedTruth() {
         return new Calibration(AdmissionReading.JET_FRACTION_ONLY, 1.4, 1.4, 0.0015, 0.8, 1.6e-3, 0.92, "truth");
     }
 
     /** Truth of fixture "shielded-run": capped admission, less windage, stiffer grease, lower discharge. */
-    static Calibration shieldedTruth() {
+    public static Calibration shieldedTruth() {
         return new Calibration(AdmissionReading.RIM_STRUCK_CAPPED, 0.8, 0.8, 0.0015, 2.0, 1.0e-3, 0.85, "truth");
     }
 }

@@ -119,4 +119,33 @@ class DynoAnalyzerTest {
         assertEquals(mid.electricalPowerW(), mid.generatorEfficiency() * mid.generatorTorqueNm() * mid.speedRadPerS(),
                 0.01 * mid.electricalPowerW());
     }
+
+    /** Missed or doubled tachometer pulses (half and twice the speed) are left out and reported. */
+    @Test
+    void spikesAreLeftOutAndReported() {
+        SyntheticBenchRun run = new SyntheticBenchRun();
+        SpeedLog clean = run.log();
+        double[] t = clean.timesS();
+        double[] w = clean.speedsRadPerS();
+        int[] at = {300, 301, 900, 1500};
+        for (int i : at) {
+            w[i] *= i % 2 == 0 ? 0.5 : 2.0;
+        }
+        DynoResult r = DynoAnalyzer.analyze(SpeedLog.of(t, w), DynoInputs.of(run.inertiaKgM2));
+        assertEquals(clean.size() - 4, r.log().size());
+        assertTrue(r.findings().stream().anyMatch(f -> f.code().equals("DYNO-SPIKES")
+                && f.message().startsWith("Left out 4 single-sample speed spike(s)")), r.findings().toString());
+        LossLaw fit = r.loss().orElseThrow().law();
+        assertEquals(run.loss.viscousNmPerRadPerS(), fit.viscousNmPerRadPerS(), 0.10 * run.loss.viscousNmPerRadPerS());
+    }
+
+    /** A clean simulated log has no spikes (the detector does not eat the run-up's steep start). */
+    @Test
+    void cleanLogHasNoSpikes() {
+        SyntheticBenchRun run = new SyntheticBenchRun();
+        boolean[] f = Outliers.find(run.log().speedsRadPerS());
+        for (boolean b : f) {
+            assertTrue(!b);
+        }
+    }
 }
