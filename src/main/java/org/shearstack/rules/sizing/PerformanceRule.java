@@ -18,7 +18,11 @@ import org.shearstack.physics.rotor.OperatingPoint;
 import org.shearstack.physics.rotor.PerformanceCurve;
 import org.shearstack.physics.rotor.TurbineModel;
 import org.shearstack.rules.InputRejectedException;
+import org.shearstack.physics.stress.BurstAssessment;
+import org.shearstack.physics.stress.SafetyFactor;
 import org.shearstack.rules.Key;
+import org.shearstack.rules.ProfileKeys;
+import org.shearstack.rules.geometry.GeoKeys;
 import org.shearstack.rules.Rule;
 import org.shearstack.rules.RuleInputs;
 import org.shearstack.rules.RuleOutputs;
@@ -46,7 +50,9 @@ final class PerformanceRule implements Rule {
     @Override
     public List<Key> reads() {
         List<Key> keys = new ArrayList<>(DesignModels.READS);
-        keys.addAll(List.of(TARGETS_SPEED, TARGETS_OBJECTIVE, SizingKeys.ROTOR_TIP_SPEED, GENERATOR_OPEN_CIRCUIT_VOLTAGE,
+        keys.addAll(List.of(TARGETS_SPEED, TARGETS_OBJECTIVE, SizingKeys.ROTOR_TIP_SPEED, SizingKeys.ROTOR_TIP_SPEED_LIMIT,
+                ProfileKeys.POISSON_RATIO, ProfileKeys.TENSILE_STRENGTH_XY, SpecKeys.TARGETS_SAFETY_FACTOR,
+                GeoKeys.PORT_CIRCLE_DIAMETER, GeoKeys.PORT_DIAMETER, GENERATOR_OPEN_CIRCUIT_VOLTAGE,
                 GENERATOR_OPEN_CIRCUIT_VOLTAGE_SPEED, GENERATOR_WINDING_RESISTANCE, GENERATOR_LOAD));
         return keys;
     }
@@ -90,6 +96,7 @@ final class PerformanceRule implements Rule {
                 "fraction of %d map points with gap Reynolds number above 2000 or relative Mach number above 1"
                         + " (the blended friction closure carries them)", CURVE_POINTS), SOURCE);
 
+        double allowable = allowableSpeedRadPerS(in);
         OperatingPoint p;
         String how;
         double electrical = 0.0;
@@ -112,12 +119,18 @@ final class PerformanceRule implements Rule {
             how = "at the target speed";
         } else {
             Objective objective = Objective.parse(in.text(TARGETS_OBJECTIVE));
-            double top = Math.min(runaway, in.get(SizingKeys.ROTOR_TIP_SPEED) / model.geometry().outerRadiusM());
+            double top = Math.min(Math.min(runaway, allowable),
+                    in.get(SizingKeys.ROTOR_TIP_SPEED) / model.geometry().outerRadiusM());
             double w = top > 0 ? GoldenSection.maximize(s -> objective.of(model.at(s)), 0, top, 1e-3 * top) : 0.0;
             p = model.at(w);
             how = "at the best " + (objective == Objective.POWER ? "power" : "efficiency")
                     + " with the rim no faster than the design rim speed";
         }
+        how += p.speedRadPerS() <= allowable * (1 + 1e-9)
+                ? String.format(Locale.ROOT, "; at or below the allowable %.0f rpm of the ported disc (BURST check's"
+                        + " computation)", rpm(allowable))
+                : String.format(Locale.ROOT, "; ABOVE the allowable %.0f rpm of the ported disc: the design speed must"
+                        + " not exceed it (see BURST-RUNAWAY for the remedies)", rpm(allowable));
         out.put(SizingKeys.OPERATING_SPEED, p.speedRadPerS(), "operating speed " + how, SOURCE);
         out.put(SizingKeys.OPERATING_POWER, p.shaftPowerW(), "shaft power " + how, SOURCE);
         out.put(SizingKeys.OPERATING_EFFICIENCY, p.efficiency(),
@@ -129,6 +142,22 @@ final class PerformanceRule implements Rule {
                 "kinetic energy of the swirl leaving the gaps, ṁ·½(Ωr₁ + κW₁)², lost without a de-swirler, " + how,
                 "physics.md §3.7 and §12.4 (derived)");
         out.put(SizingKeys.ELECTRICAL_POWER, electrical, electricalHow, "physics.md §8.3 (DC machine, derived)");
+    }
+
+    /**
+     * Allowable speed of the disc as built: ported out to the port ring's outer edge (the kit's port circle plus
+     * one port diameter, else the exhaust diameter, as the BURST check reads it), with the burst checks'
+     * computation ({@link BurstAssessment#allowableRimSpeedOfPortedDiscMPerS}).
+     */
+    static double allowableSpeedRadPerS(RuleInputs in) {
+        double d = in.get(SpecKeys.ROTOR_DIAMETER);
+        double ring = in.has(GeoKeys.PORT_CIRCLE_DIAMETER) && in.has(GeoKeys.PORT_DIAMETER)
+                ? in.get(GeoKeys.PORT_CIRCLE_DIAMETER) + in.get(GeoKeys.PORT_DIAMETER)
+                : in.get(SpecKeys.ROTOR_EXHAUST_DIAMETER);
+        double ratio = Math.min(0.95, ring / d);
+        SafetyFactor factor = new SafetyFactor(Math.max(SafetyFactor.MIN, in.get(SpecKeys.TARGETS_SAFETY_FACTOR)));
+        return BurstAssessment.allowableRimSpeedOfPortedDiscMPerS(ratio, in.get(ProfileKeys.DENSITY),
+                in.get(ProfileKeys.POISSON_RATIO), in.get(ProfileKeys.TENSILE_STRENGTH_XY), factor) / (d / 2000.0);
     }
 
     private static double rpm(double radPerS) {

@@ -22,6 +22,10 @@ import org.shearstack.rules.ProfileKeys;
 import org.shearstack.rules.Rule;
 import org.shearstack.rules.RuleInputs;
 import org.shearstack.rules.RuleOutputs;
+import org.shearstack.physics.stress.BurstAssessment;
+import org.shearstack.physics.stress.PrintedStrength;
+import org.shearstack.physics.stress.SafetyFactor;
+import org.shearstack.physics.stress.SpinningAnnulus;
 import org.shearstack.rules.geometry.GeoKeys;
 
 /**
@@ -31,12 +35,13 @@ import org.shearstack.rules.geometry.GeoKeys;
  */
 final class RotorSizing {
 
-    /** Strength knock-down for printed discs (physics.md §4.3: lower XY bound × 0.7, engineering judgment). */
-    static final double PRINTED_STRENGTH_FACTOR = 0.7;
     /** Exhaust radius ratio used before the exhaust is sized (Krishnan et al. 2011: r₁/r₂ ≈ 0.47–0.51). */
     static final double FIRST_EXHAUST_RATIO = 0.45;
     /** Highest exhaust-port Mach number accepted (physics.md §3.7: below 0.3). */
     static final double MAX_PORT_MACH = 0.3;
+    /** Smallest and largest exhaust radius ratio r₁/r₂ SIZE-EXHAUST tries (Krishnan et al. 2011 used 0.47–0.51). */
+    static final double MIN_EXHAUST_RATIO = 0.30;
+    static final double MAX_EXHAUST_RATIO = 0.60;
 
     private RotorSizing() {
     }
@@ -78,13 +83,27 @@ final class RotorSizing {
     }
 
     private static void tipLimit(RuleInputs in, RuleOutputs out) {
-        double s = PRINTED_STRENGTH_FACTOR * in.get(ProfileKeys.TENSILE_STRENGTH_XY) / in.get(TARGETS_SAFETY_FACTOR);
-        double nu = in.get(ProfileKeys.POISSON_RATIO);
-        double v = Math.sqrt(4.0 * s / ((3.0 + nu) * in.get(ProfileKeys.DENSITY)));
-        out.put(SizingKeys.ROTOR_TIP_SPEED_LIMIT, v,
-                "√(4 S/((3+ν) ρ)) for a disc with a small central hole, S = 0.7 × XY strength / safety factor on"
-                        + " stress",
-                "Timoshenko & Goodier §32, holed rotating disc (physics.md §4.1–§4.3)");
+        double f = in.get(TARGETS_SAFETY_FACTOR);
+        SafetyFactor factor;
+        try {
+            factor = new SafetyFactor(f);
+        } catch (IllegalArgumentException e) {
+            throw new InputRejectedException(TARGETS_SAFETY_FACTOR, "a safety factor on stress between "
+                    + SafetyFactor.MIN + " and " + SafetyFactor.MAX, String.format(Locale.ROOT, "%.3g", f));
+        }
+        double xy = in.get(ProfileKeys.TENSILE_STRENGTH_XY);
+        double v = BurstAssessment.allowableRimSpeedOfPortedDiscMPerS(MAX_EXHAUST_RATIO, in.get(ProfileKeys.DENSITY),
+                in.get(ProfileKeys.POISSON_RATIO), xy, factor);
+        out.put(SizingKeys.ROTOR_TIP_SPEED_LIMIT, v, String.format(Locale.ROOT,
+                "allowable rim speed of a disc ported out to r₁/r₂ = %.2f (the largest exhaust SIZE-EXHAUST may"
+                        + " choose, so the sized disc is allowed at least this): peak-stress burst speed of a holed"
+                        + " disc × port allowance %.1f at the design strength %.1f MPa (%.1f × printed-flat strength),"
+                        + " divided by √%.2g (factor on stress); the same computation as the BURST-RUNAWAY check. The"
+                        + " design and operating speeds are kept at or below it.",
+                MAX_EXHAUST_RATIO, SpinningAnnulus.EXHAUST_PORT_ALLOWANCE, PrintedStrength.inPlanePa(xy) / 1e6,
+                PrintedStrength.IN_PLANE_PRINT_FACTOR, factor.onStress()),
+                "Timoshenko & Goodier §32 holed rotating disc; physics.md §4.2–§4.3, §12.7 (BurstAssessment,"
+                        + " SpinningAnnulus, PrintedStrength, SafetyFactor)");
     }
 
     private static void tip(RuleInputs in, RuleOutputs out) {
@@ -230,7 +249,7 @@ final class RotorSizing {
                 (int) Math.round(in.get(ROTOR_DISCS)));
         double best = FIRST_EXHAUST_RATIO;
         double bestValue = Double.NEGATIVE_INFINITY;
-        for (double ratio = 0.30; ratio <= 0.6001; ratio += 0.05) {
+        for (double ratio = MIN_EXHAUST_RATIO; ratio <= MAX_EXHAUST_RATIO + 1e-4; ratio += 0.05) {
             SizingModel.Score s = m.score(base.withExhaustDiameter(ratio * d));
             if (s.point().exhaustMach() <= MAX_PORT_MACH && s.value() > bestValue) {
                 bestValue = s.value();
