@@ -77,19 +77,21 @@ final class PerformanceRule implements Rule {
             throw new InputRejectedException(SpecKeys.ROTOR_DISCS, "at least 2 discs",
                     QuantityFormat.format(in.get(SpecKeys.ROTOR_DISCS), Dimension.COUNT));
         }
-        TurbineModel model = DesignModels.turbineModel(v, Calibration.nominal());
+        TurbineModel model = DesignModels.turbineModel(v, SpecCalibration.calibration(v));
+        String calibration = SpecCalibration.words(v);
         PerformanceCurve curve = model.curve(CURVE_POINTS);
         double runaway = curve.runawaySpeedRadPerS();
         double optimistic = model.withCalibration(model.calibration().optimistic()).runawaySpeedRadPerS();
         double pessimistic = model.withCalibration(model.calibration().pessimistic()).runawaySpeedRadPerS();
         double upper = Math.max(runaway, Math.max(optimistic, pessimistic));
         out.put(SizingKeys.RUNAWAY_SPEED, runaway, "speed where the shaft torque of the coupled model falls to zero"
-                + " (nominal calibration, parasitic drag of end faces, rims and bearings included)", SOURCE);
+                + " (" + calibration + "; parasitic drag of end faces, rims and bearings included)", source(v));
         out.put(SizingKeys.RUNAWAY_UPPER_BOUND, upper, String.format(Locale.ROOT,
                 "highest runaway of the uncertainty band: optimistic %.0f, estimate %.0f, pessimistic %.0f rpm;"
-                        + " losses never set to zero (physics.md §12.8)", rpm(optimistic), rpm(runaway),
-                rpm(pessimistic)), SOURCE);
-        out.put(SizingKeys.STALL_TORQUE, curve.stallTorqueNm(), "shaft torque at zero speed", SOURCE);
+                        + " losses never set to zero (physics.md §12.8); band around the %s", rpm(optimistic),
+                rpm(runaway), rpm(pessimistic), calibration), source(v));
+        out.put(SizingKeys.STALL_TORQUE, curve.stallTorqueNm(), "shaft torque at zero speed (" + calibration + ")",
+                source(v));
         out.put(SizingKeys.ADMISSION_FRACTION, model.geometry().admissionFraction(),
                 "φ = N_g b/(N_g b + N_d t): the part of the slot jet that faces gaps", "physics.md §1.5 (derived)");
         out.put(SizingKeys.OUT_OF_RANGE_FRACTION, curve.fractionOutOfRange(), String.format(Locale.ROOT,
@@ -131,13 +133,15 @@ final class PerformanceRule implements Rule {
                         + " computation)", rpm(allowable))
                 : String.format(Locale.ROOT, "; ABOVE the allowable %.0f rpm of the ported disc: the design speed must"
                         + " not exceed it (see BURST-RUNAWAY for the remedies)", rpm(allowable));
-        out.put(SizingKeys.OPERATING_SPEED, p.speedRadPerS(), "operating speed " + how, SOURCE);
-        out.put(SizingKeys.OPERATING_POWER, p.shaftPowerW(), "shaft power " + how, SOURCE);
+        how += " (" + calibration + ")";
+        String source = source(v);
+        out.put(SizingKeys.OPERATING_SPEED, p.speedRadPerS(), "operating speed " + how, source);
+        out.put(SizingKeys.OPERATING_POWER, p.shaftPowerW(), "shaft power " + how, source);
         out.put(SizingKeys.OPERATING_EFFICIENCY, p.efficiency(),
-                "shaft power / isentropic power of the air from supply pressure to ambient, " + how, SOURCE);
-        out.put(SizingKeys.PERFORMANCE_MASS_FLOW, p.massFlowKgPerS(), "mass flow " + how, SOURCE);
+                "shaft power / isentropic power of the air from supply pressure to ambient, " + how, source);
+        out.put(SizingKeys.PERFORMANCE_MASS_FLOW, p.massFlowKgPerS(), "mass flow " + how, source);
         out.put(SizingKeys.SUPPLY_PLENUM_PRESSURE, p.plenumPressurePa(),
-                "plenum pressure where the supply path's ISO 6358 flow equals the nozzle's, " + how, SOURCE);
+                "plenum pressure where the supply path's ISO 6358 flow equals the nozzle's, " + how, source);
         out.put(SizingKeys.EXIT_SWIRL_LOSS, p.exitSwirlLossW(),
                 "kinetic energy of the swirl leaving the gaps, ṁ·½(Ωr₁ + κW₁)², lost without a de-swirler, " + how,
                 "physics.md §3.7 and §12.4 (derived)");
@@ -158,6 +162,11 @@ final class PerformanceRule implements Rule {
         SafetyFactor factor = new SafetyFactor(Math.max(SafetyFactor.MIN, in.get(SpecKeys.TARGETS_SAFETY_FACTOR)));
         return BurstAssessment.allowableRimSpeedOfPortedDiscMPerS(ratio, in.get(ProfileKeys.DENSITY),
                 in.get(ProfileKeys.POISSON_RATIO), in.get(ProfileKeys.TENSILE_STRENGTH_XY), factor) / (d / 2000.0);
+    }
+
+    private static String source(Values v) {
+        return SpecCalibration.calibrated(v) ? SOURCE + "; CALIBRATED: loss coefficients fitted to the user's bench"
+                + " runs (spec key calibration)" : SOURCE;
     }
 
     private static double rpm(double radPerS) {

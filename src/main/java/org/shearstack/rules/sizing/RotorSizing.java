@@ -52,6 +52,7 @@ final class RotorSizing {
         keys.addAll(List.of(NOZZLE_JET_ANGLE, ProfileKeys.NOZZLE_DIAMETER, ProfileKeys.LINE_WIDTH, TARGETS_OBJECTIVE,
                 TARGETS_SPEED, SizingKeys.ROTOR_TIP_SPEED, SizingKeys.NOZZLE_MASS_FLOW));
         keys.addAll(List.of(more));
+        keys.addAll(SpecCalibration.KEYS);
         return keys;
     }
 
@@ -122,11 +123,14 @@ final class RotorSizing {
                 : OptionalDouble.empty();
         return new SizingModel(FlowParts.supply(v), FlowParts.nozzle(v), in.get(NOZZLE_JET_ANGLE),
                 in.get(ProfileKeys.NOZZLE_DIAMETER), in.get(ProfileKeys.LINE_WIDTH),
-                Objective.parse(in.text(TARGETS_OBJECTIVE)), target, in.get(SizingKeys.ROTOR_TIP_SPEED));
+                Objective.parse(in.text(TARGETS_OBJECTIVE)), target, in.get(SizingKeys.ROTOR_TIP_SPEED),
+                SpecCalibration.calibration(v));
     }
 
     private static String objectiveWords(SizingModel m) {
-        String what = m.objective() == Objective.POWER ? "shaft power" : "efficiency";
+        String what = (m.objective() == Objective.POWER ? "shaft power" : "efficiency")
+                + (m.calibration().name().equals("calibrated") ? " (model with the CALIBRATED coefficients of the"
+                        + " spec's calibration file)" : "");
         return m.targetSpeed().isPresent()
                 ? what + String.format(Locale.ROOT, " at the target speed %.0f rpm", m.targetSpeed().getAsDouble() * 30
                 / Math.PI)
