@@ -17,6 +17,7 @@ import org.shearstack.physics.rotor.Calibration;
 import org.shearstack.physics.rotor.OperatingPoint;
 import org.shearstack.physics.rotor.PerformanceCurve;
 import org.shearstack.physics.rotor.TurbineModel;
+import org.shearstack.physics.rotor.Validity;
 import org.shearstack.rules.InputRejectedException;
 import org.shearstack.physics.stress.BurstAssessment;
 import org.shearstack.physics.stress.SafetyFactor;
@@ -95,8 +96,12 @@ final class PerformanceRule implements Rule {
         out.put(SizingKeys.ADMISSION_FRACTION, model.geometry().admissionFraction(),
                 "φ = N_g b/(N_g b + N_d t): the part of the slot jet that faces gaps", "physics.md §1.5 (derived)");
         out.put(SizingKeys.OUT_OF_RANGE_FRACTION, curve.fractionOutOfRange(), String.format(Locale.ROOT,
-                "fraction of %d map points with gap Reynolds number above 2000 or relative Mach number above 1"
-                        + " (the blended friction closure carries them)", CURVE_POINTS), SOURCE);
+                "fraction of %d map points outside the model's range: gap Reynolds number above %.0f (end of the"
+                        + " blended laminar–Blasius friction closure), relative Mach number above 1, or a failed gap"
+                        + " march; %.0f %% of the points have turbulent gap flow (Reynolds number above %.0f), which"
+                        + " the blended closure carries, so they are not counted as outside", CURVE_POINTS,
+                Validity.BLENDED_REYNOLDS_LIMIT, 100 * curve.fractionBeyondLaminar(), Validity.LAMINAR_REYNOLDS_LIMIT),
+                "physics.md §3.4, §12.5; Blasius 1913 and Churchill & Usagi 1972 (from memory); derived");
 
         double allowable = allowableSpeedRadPerS(in);
         OperatingPoint p;

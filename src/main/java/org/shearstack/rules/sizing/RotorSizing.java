@@ -42,6 +42,8 @@ final class RotorSizing {
     /** Smallest and largest exhaust radius ratio r₁/r₂ SIZE-EXHAUST tries (Krishnan et al. 2011 used 0.47–0.51). */
     static final double MIN_EXHAUST_RATIO = 0.30;
     static final double MAX_EXHAUST_RATIO = 0.60;
+    /** Largest gap the optimiser tries, in Ekman thicknesses √(ν/Ω) (physics.md §3.8b: b/δ_E ≈ 2–4, from memory). */
+    static final double MAX_GAP_EKMAN_RATIO = 4.0;
 
     private RotorSizing() {
     }
@@ -76,7 +78,8 @@ final class RotorSizing {
                 FunctionRule.of("SIZE-DIAMETER", modelReads(ROTOR_DISC_THICKNESS, GeoKeys.GAP_PREFERRED,
                         ProfileKeys.BED_X, ProfileKeys.BED_Y, ProfileKeys.LAYER_HEIGHT), List.of(ROTOR_DIAMETER), RotorSizing::diameter),
                 FunctionRule.of("SIZE-GAP", modelReads(ROTOR_DIAMETER, ROTOR_DISC_THICKNESS, GeoKeys.GAP_MIN,
-                        GeoKeys.GAP_PREFERRED, ProfileKeys.LAYER_HEIGHT), List.of(ROTOR_GAP), RotorSizing::gap),
+                        GeoKeys.GAP_PREFERRED, ProfileKeys.LAYER_HEIGHT),
+                        List.of(ROTOR_GAP, SizingKeys.GAP_AT_SEARCH_BOUND), RotorSizing::gap),
                 FunctionRule.of("SIZE-DISCS", modelReads(ROTOR_DIAMETER, ROTOR_DISC_THICKNESS, ROTOR_GAP),
                         List.of(ROTOR_DISCS), RotorSizing::discs),
                 FunctionRule.of("SIZE-EXHAUST", modelReads(ROTOR_DIAMETER, ROTOR_DISC_THICKNESS, ROTOR_GAP,
@@ -178,13 +181,18 @@ final class RotorSizing {
         double speed = m.targetSpeed().orElse(in.get(SizingKeys.ROTOR_TIP_SPEED) * 2000.0 / d);
         double ekman = SizingModel.ekmanMm(speed);
         double flow = in.get(SizingKeys.NOZZLE_MASS_FLOW);
-        double hi = Math.max(2.0 * printerLimit(in, GeoKeys.GAP_PREFERRED, 1.875, 1), 2.0 * 2.0 * ekman);
+        double preferred = printerLimit(in, GeoKeys.GAP_PREFERRED, 1.875, 1);
+        // Upper bound: the larger of the printer's preferred gap (common practice: ~0.75 mm gaps on a 0.4 mm
+        // nozzle) and b/δ_E = 4 (physics.md §3.8b, from memory), raised to whole layers. Beyond it the model's
+        // score keeps rising only through the admission fraction φ = N_g b/(N_g b + N_d t), while the gap flow no
+        // longer couples to the discs (b ≫ δ_E) and runs far outside the laminar range.
+        double hi = Math.max(gMin, Math.ceil(Math.max(preferred, MAX_GAP_EKMAN_RATIO * ekman) / layer - 1e-9) * layer);
         TreeSet<Double> candidates = new TreeSet<>();
         int steps = 8;
         for (int i = 0; i <= steps; i++) {
-            candidates.add(Math.max(gMin, Math.round((gMin + (hi - gMin) * i / steps) / layer) * layer));
+            candidates.add(Math.min(hi, Math.max(gMin, Math.round((gMin + (hi - gMin) * i / steps) / layer) * layer)));
         }
-        candidates.add(Math.max(gMin, Math.round(2.0 * ekman / layer) * layer));
+        candidates.add(Math.min(hi, Math.max(gMin, Math.round(2.0 * ekman / layer) * layer)));
         double best = gMin;
         double bestValue = Double.NEGATIVE_INFINITY;
         for (double g : candidates) {
@@ -196,12 +204,20 @@ final class RotorSizing {
                 best = g;
             }
         }
+        boolean atBound = best >= hi - 1e-9 && hi > gMin;
+        out.put(SizingKeys.GAP_AT_SEARCH_BOUND, atBound ? 1.0 : 0.0, atBound
+                ? "1: the model's best gap is the upper end of the search range (see rotor.gap)"
+                : "0: the model's best gap lies inside the search range", "SIZE-GAP");
         out.put(ROTOR_GAP, best, String.format(Locale.ROOT,
                 "start from the boundary-layer scale 2√(ν/Ω) = %.3f mm at %.0f rpm; model evaluated at %d gaps from the"
-                        + " printer's minimum %.2f mm to %.2f mm in whole layers (disc count from the flow per gap);"
-                        + " best %s", 2 * ekman, speed * 30 / Math.PI, candidates.size(), gMin, hi, objectiveWords(m)),
-                "Ekman thickness (physics.md §3.4) and the coupled flow model (derived); printer minimum from"
-                        + " GEO-DISC-LIMITS");
+                        + " printer's minimum %.2f mm to %.2f mm in whole layers (the larger of the printer's preferred"
+                        + " gap %.2f mm and 4 Ekman thicknesses %.3f mm; disc count from the flow per gap); best %s%s",
+                2 * ekman, speed * 30 / Math.PI, candidates.size(), gMin, hi, preferred, MAX_GAP_EKMAN_RATIO * ekman,
+                objectiveWords(m), atBound ? "; AT THE SEARCH BOUND: the model's score still rises with the gap"
+                        + " because the admission fraction φ = N_g b/(N_g b + N_d t) grows, so the bound, not the"
+                        + " model, sets this gap" : ""),
+                "Ekman thickness (physics.md §3.4, §3.8b b/δ_E ≈ 2–4 from memory) and the coupled flow model"
+                        + " (derived); printer minimum and preferred gap from GEO-DISC-LIMITS (common practice)");
     }
 
     private static void discs(RuleInputs in, RuleOutputs out) {

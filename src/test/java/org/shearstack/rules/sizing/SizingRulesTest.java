@@ -79,6 +79,18 @@ class SizingRulesTest {
         // exhaust ratio chosen inside the searched range
         double ratio = d.get(SpecKeys.ROTOR_EXHAUST_DIAMETER) / d2;
         assertTrue(ratio > 0.29 && ratio < 0.61, "r1/r2 " + ratio);
+        // the design never runs above the disc's allowable speed, and the derivation says so
+        assertTrue(d.get(SizingKeys.OPERATING_SPEED) * d2 / 2000 <= d.get(SizingKeys.ROTOR_TIP_SPEED) + 1e-9
+                || d.derivation(SizingKeys.OPERATING_SPEED).formula().contains("at or below the allowable"));
+        assertTrue(d.derivation(SizingKeys.OPERATING_SPEED).formula().contains("at or below the allowable"),
+                d.derivation(SizingKeys.OPERATING_SPEED).formula());
+        // gap no wider than the larger of the preferred gap and 4 Ekman thicknesses (physics.md §3.8b, from memory)
+        double omega = d.get(SizingKeys.ROTOR_TIP_SPEED) * 2000 / d2;
+        double bound = Math.max(d.get(org.shearstack.rules.geometry.GeoKeys.GAP_PREFERRED),
+                4 * SizingModel.ekmanMm(omega)) + d.get(ProfileKeys.LAYER_HEIGHT);
+        assertTrue(d.get(SpecKeys.ROTOR_GAP) <= bound, d.get(SpecKeys.ROTOR_GAP) + " > " + bound);
+        boolean atBound = d.get(SizingKeys.GAP_AT_SEARCH_BOUND) == 1.0;
+        assertEquals(atBound, d.derivation(SpecKeys.ROTOR_GAP).formula().contains("AT THE SEARCH BOUND"));
     }
 
     @Test
