@@ -19,7 +19,7 @@ public final class FamilyHtml {
             table{border-collapse:collapse;font-size:.85em}th,td{border:1px solid #ccc;padding:3px 6px}
             th{background:#f0f0f0;vertical-align:bottom}td.n{text-align:right;font-variant-numeric:tabular-nums}
             tr.fail td,tr.bad-input td,tr.error td{background:#fde8e8}tr.caution td.status{background:#fff4e6}
-            tr.not-run td{color:#888}td.status{font-weight:bold}
+            tr.not-run td{color:#888}td.status{font-weight:bold}td.why{min-width:22em;font-size:.92em}
             .charts{display:flex;flex-wrap:wrap;gap:1em}
             svg.chart{border:1px solid #ddd;background:#fff}
             svg .title{font-size:13px;font-weight:bold}svg .tick{font-size:10px;fill:#333}svg .axis{font-size:11px}
@@ -109,13 +109,13 @@ public final class FamilyHtml {
             for (VariedValue v : r.values()) {
                 b.append("<td>").append(Html.esc(v.written())).append("</td>");
             }
-            b.append("<td class=\"status\">").append(r.status().word()).append("</td><td>")
+            b.append("<td class=\"status\">").append(r.status().word()).append("</td><td class=\"why\">")
                     .append(Html.esc(r.firstFailure())).append("</td>");
             double[] dims = r.dimensions();
             for (int i = 0; i < dims.length; i++) {
                 boolean text = FamilyColumns.DIMENSIONS.get(i).text();
                 b.append(text ? "<td>" : "<td class=\"n\">")
-                        .append(Html.esc(text ? r.dimensionTexts().get(i) : sig(dims[i], 4))).append("</td>");
+                        .append(Html.esc(text ? r.dimensionTexts().get(i) : trim(sig(dims[i], 4)))).append("</td>");
             }
             double[] figs = r.figures();
             for (int i = 0; i < figs.length; i++) {
@@ -151,6 +151,11 @@ public final class FamilyHtml {
         }
         double shown = roundDown ? Math.floor(v * Math.pow(10, digits)) / Math.pow(10, digits) : v;
         return fixed(shown, digits);
+    }
+
+    /** "60.00" → "60", "0.8000" → "0.8". */
+    static String trim(String s) {
+        return s.contains(".") ? s.replaceAll("0+$", "").replaceAll("\\.$", "") : s;
     }
 
     static String sig(double v, int digits) {

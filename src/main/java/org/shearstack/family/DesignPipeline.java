@@ -1,0 +1,56 @@
+package org.shearstack.family;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.shearstack.io.AtomicFolder;
+import org.shearstack.io.report.ReportJson;
+import org.shearstack.io.report.ReportWriter;
+import org.shearstack.job.DesignJob;
+import org.shearstack.job.DesignOutput;
+import org.shearstack.job.DesignResult;
+import org.shearstack.job.JobOptions;
+import org.shearstack.profile.Profiles;
+import org.shearstack.rules.Engine;
+import org.shearstack.rules.RuleCatalog;
+import org.shearstack.spec.Spec;
+
+/**
+ * The family's variant pipeline is the design command's own: {@link DesignJob} (spec → rules → model → checks →
+ * kit → report content) and {@link DesignOutput} (every file, atomically). One rule engine serves every variant
+ * (it holds no state). With check-only, a variant's folder holds only its report.json (no meshes, no HTML page).
+ */
+public final class DesignPipeline implements VariantPipeline {
+
+    private final Profiles profiles;
+    private final Engine engine;
+    private final boolean checkOnly;
+
+    private DesignPipeline(Profiles profiles, boolean checkOnly) {
+        this.profiles = profiles;
+        this.engine = RuleCatalog.engine(profiles);
+        this.checkOnly = checkOnly;
+    }
+
+    /** The pipeline for a family: with meshes, or check-only. */
+    public static DesignPipeline of(Profiles profiles, boolean checkOnly) {
+        return new DesignPipeline(profiles, checkOnly);
+    }
+
+    @Override
+    public JsonNode run(Spec spec, Path folder) throws IOException {
+        JobOptions options = checkOnly ? JobOptions.checkOnly() : JobOptions.full().withPreview(false);
+        DesignResult result = DesignJob.run(spec, profiles, engine, options);
+        JsonNode tree = ReportJson.tree(result.report());
+        if (checkOnly) {
+            String json = ReportJson.text(result.report());
+            AtomicFolder.write(folder, dir -> Files.writeString(dir.resolve(ReportWriter.JSON), json,
+                    StandardCharsets.UTF_8));
+        } else {
+            DesignOutput.write(result, folder);
+        }
+        return tree;
+    }
+}
