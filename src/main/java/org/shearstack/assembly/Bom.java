@@ -6,7 +6,6 @@ import java.util.Locale;
 
 import org.shearstack.part.DesignValues;
 import org.shearstack.part.Dims;
-import org.shearstack.part.GeneratorBracket;
 import org.shearstack.part.HubShaft;
 import org.shearstack.rules.ProfileKeys;
 
@@ -42,12 +41,13 @@ public final class Bom {
             case "nut" -> rows.add(hw("nut " + d.fastener(), d.boltCount(), "hex nut ISO 4032 " + d.fastener()));
             case "tapped" -> rows.add(hw("tap " + d.fastener(), 1, "tap the free cover's pilots " + d.fastener()));
             default -> rows.add(hw("heat-set insert " + d.fastener(), d.boltCount(),
-                    "threaded heat-set insert " + d.fastener() + ", about " + n(d.screw().insertLengthMm()) + " mm long"));
+                    "threaded heat-set insert " + d.fastener() + ", about " + n(d.insertLength()) + " mm long"));
         }
         if (d.sealKind().equals("o-ring")) {
-            double cs = d.grooveDepth() > 0 ? csOf(d) : 0;
-            rows.add(hw(String.format(Locale.ROOT, "o-ring %s × %s", n(d.oRingInner()), n(cs)), 2, String.format(
-                    Locale.ROOT, "O-ring ID %s mm × CS %s mm, or %s mm of %s mm cord each", n(d.oRingInner()), n(cs),
+            // the ring the GEO-HOUSING-LAYOUT rule sized the groove for, as it chose it
+            double cs = d.oRingCrossSection();
+            rows.add(hw("o-ring " + d.oRing(), 2, String.format(Locale.ROOT,
+                    "O-ring ID %s mm × CS %s mm, or %s mm of %s mm cord each", n(d.oRingInner()), n(cs),
                     n(d.cordLength()), n(cs))));
         } else if (d.sealKind().equals("gasket")) {
             rows.add(hw("gasket", 2, "flat gasket cut to the housing face, inside the bolt circle"));
@@ -60,17 +60,11 @@ public final class Bom {
                     n(HubShaft.metalShaftLength(d)), n(d.flatDepth()))));
         }
         if (d.generator()) {
-            rows.add(hw("screw " + d.motorScrews() + " × " + n(GeneratorBracket.motorScrewLength(d)), 2,
+            rows.add(hw("screw " + d.motorScrews() + " × " + n(d.bracketScrewLength()), 2,
                     "motor face screws ISO 4762 " + d.motorScrews()));
             rows.add(hw("generator", 1, "cylindrical DC motor as in the spec"));
         }
         return List.copyOf(rows);
-    }
-
-    private static double csOf(Dims d) {
-        return org.shearstack.rules.geometry.GlandCatalog.all().stream()
-                .filter(g -> g.depthMm() == d.grooveDepth() && g.widthMm() == d.grooveWidth())
-                .map(org.shearstack.rules.geometry.GlandCatalog.Gland::crossSectionMm).findFirst().orElse(0.0);
     }
 
     private static BomRow hw(String item, int count, String description) {

@@ -1,27 +1,31 @@
 package org.shearstack.assembly;
 
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 
-import org.locationtech.jts.geom.Coordinate;
-import org.locationtech.jts.geom.Geometry;
 import org.shearstack.check.Finding;
 import org.shearstack.check.Findings;
 import org.shearstack.check.Severity;
 import org.shearstack.geom.GeometryContext;
-import org.shearstack.geom.LayeredSolid;
 import org.shearstack.geom.Region;
-import org.shearstack.geom.Slab;
 import org.shearstack.part.Dims;
 
 /**
  * Interference and running clearances on the layered representation in the assembly frame. Two bodies
- * interfere where slabs overlapping in Z have regions overlapping in area. A rotating body is swept about
- * the axis (each slab becomes the annulus between its nearest and farthest points from the axis) before it
- * is compared with a stationary one; rotating bodies are compared with each other as they are (they turn
- * together). The discs' radial clearance to the housing and their axial end play to the covers are measured
- * and compared with what the rules chose.
+ * interfere where slabs overlapping in Z have regions overlapping in area.
+ *
+ * <p>A turning body sweeps, about the axis, each connected piece of a slab into the annulus between the piece's
+ * nearest and farthest points from the axis; and the radii a connected piece of any slab covers form one
+ * interval (the continuous image of a connected set). So a turning body meets a stationary one exactly where
+ * these radial intervals overlap, and the same holds for a round body (a bearing) against anything: those pairs
+ * are decided on 2D radial profiles ({@link RadialProfile}) without any polygon overlay. Only pairs of
+ * non-round bodies that turn together or stand still together (a disc on the hexagonal hub, the nozzle insert
+ * in its pocket) need an area overlay, and only for slabs whose heights and boxes overlap; equal region pairs
+ * (eight identical discs on one hub) are computed once. The discs' radial clearance to the housing and their
+ * axial end play to the covers are measured and compared with what the rules chose.
  */
 public final class Interference {
 
@@ -29,13 +33,16 @@ public final class Interference {
     public static final double AREA_TOLERANCE_MM2 = 1e-3;
     /** Heights overlapping by less than this are touching faces (mm). */
     public static final double Z_TOLERANCE_MM = 1e-6;
+    /** Radial overlaps below this are contact (mm; a few grid cells, far below a printed feature). */
+    public static final double RADIAL_TOLERANCE_MM = 2e-3;
 
     private Interference() {
     }
 
     /** Runs the checks: findings ASM-INTERFERENCE (fail), ASM-RADIAL-CLEARANCE and ASM-END-PLAY (ok or fail). */
     public static List<Finding> check(List<Body> bodies, Dims d, GeometryContext ctx) {
-        List<Body> swept = bodies.stream().map(b -> b.rotating() ? sweep(b, ctx) : b).toList();
+        List<RadialProfile> profiles = bodies.stream().map(b -> RadialProfile.of(b.solid())).toList();
+        Map<AreaKey, Double> areas = new HashMap<>();
         List<Finding> out = new ArrayList<>();
         double radial = Double.POSITIVE_INFINITY;
         double axial = Double.POSITIVE_INFINITY;
@@ -43,24 +50,36 @@ public final class Interference {
             for (int j = i + 1; j < bodies.size(); j++) {
                 Body a = bodies.get(i);
                 Body b = bodies.get(j);
+                RadialProfile pa = profiles.get(i);
+                RadialProfile pb = profiles.get(j);
                 boolean mixed = a.rotating() != b.rotating();
-                Body sa = mixed ? swept.get(i) : a;
-                Body sb = mixed ? swept.get(j) : b;
-                double area = overlapArea(sa.solid(), sb.solid());
-                if (area > AREA_TOLERANCE_MM2) {
-                    out.add(Findings.of("ASM-INTERFERENCE", Severity.FAIL,
-                            a.name() + " and " + b.name() + (mixed ? " (turning)" : "") + " overlap by "
-                                    + Findings.num(area, 3) + " mm² of section",
-                            area, 0, "mm2", Double.NaN, a.name(), b.name(), "move or shrink one of the two parts"));
+                if (mixed || a.round() || b.round()) {
+                    double depth = pa.radialOverlapMm(pb);
+                    if (depth > RADIAL_TOLERANCE_MM) {
+                        out.add(Findings.of("ASM-INTERFERENCE", Severity.FAIL,
+                                a.name() + " and " + b.name() + (mixed ? " (turning)" : "") + " overlap by "
+                                        + Findings.num(depth, 3) + " mm radially",
+                                depth, 0, "mm", Double.NaN, a.name(), b.name(), "move or shrink one of the two parts"));
+                    }
+                } else if (pa.overlapsInZ(pb)) {
+                    double area = overlapArea(pa, pb, areas);
+                    if (area > AREA_TOLERANCE_MM2) {
+                        out.add(Findings.of("ASM-INTERFERENCE", Severity.FAIL,
+                                a.name() + " and " + b.name() + " overlap by " + Findings.num(area, 3)
+                                        + " mm² of section",
+                                area, 0, "mm2", Double.NaN, a.name(), b.name(), "move or shrink one of the two parts"));
+                    }
                 }
                 if (mixed) {
-                    Body rot = a.rotating() ? sa : sb;
-                    Body fixed = a.rotating() ? sb : sa;
+                    Body rot = a.rotating() ? a : b;
+                    Body fixed = a.rotating() ? b : a;
+                    RadialProfile pr = a.rotating() ? pa : pb;
+                    RadialProfile pf = a.rotating() ? pb : pa;
                     if (rot.family().equals("rotor")) {
                         if (fixed.family().equals("housing") || fixed.family().equals("nozzle")) {
-                            radial = Math.min(radial, radialGap(rot.solid(), fixed.solid()));
+                            radial = Math.min(radial, pr.radialGapMm(pf));
                         } else if (fixed.family().equals("cover")) {
-                            axial = Math.min(axial, axialGap(rot.solid(), fixed.solid()));
+                            axial = Math.min(axial, pr.axialGapMm(pf));
                         }
                     }
                 }
@@ -82,65 +101,31 @@ public final class Interference {
                 ok ? "" : "rebuild the kit; a part does not sit where the layout says");
     }
 
-    /** The solid turned about the Z axis: each slab becomes an annulus (or disc) covering its sweep. */
-    static Body sweep(Body b, GeometryContext ctx) {
-        List<Slab> slabs = new ArrayList<>();
-        for (Slab s : b.solid().slabs()) {
-            Geometry g = s.region().geometry();
-            double rMax = 0;
-            for (Coordinate c : g.getCoordinates()) {
-                rMax = Math.max(rMax, Math.hypot(c.x, c.y));
-            }
-            double rMin = s.region().containsPoint(0, 0) ? 0
-                    : g.distance(ctx.factory().createPoint(new Coordinate(0, 0)));
-            Region r = Region.disc(ctx, 0, 0, 2 * rMax);
-            if (rMin > ctx.gridMm() * 4) {
-                r = r.minus(Region.disc(ctx, 0, 0, 2 * rMin));
-            }
-            slabs.add(new Slab(s.z0Mm(), s.z1Mm(), r));
+    /** Two regions by identity: placed copies of one part share their region objects. */
+    private record AreaKey(Region a, Region b) {
+        @Override
+        public boolean equals(Object o) {
+            return o instanceof AreaKey k && k.a == a && k.b == b;
         }
-        return new Body(b.name(), b.family(), true, LayeredSolid.of(ctx, slabs));
+
+        @Override
+        public int hashCode() {
+            return System.identityHashCode(a) * 31 + System.identityHashCode(b);
+        }
     }
 
-    /** Largest overlap area of two slabs that overlap in Z. */
-    static double overlapArea(LayeredSolid a, LayeredSolid b) {
-        if (a.maxZMm() <= b.minZMm() + Z_TOLERANCE_MM || b.maxZMm() <= a.minZMm() + Z_TOLERANCE_MM) {
-            return 0;
-        }
+    /** Largest overlap area of two slabs that overlap in Z and in their boxes. */
+    private static double overlapArea(RadialProfile a, RadialProfile b, Map<AreaKey, Double> cache) {
         double worst = 0;
-        for (Slab sa : a.slabs()) {
-            for (Slab sb : b.slabs()) {
-                if (Math.min(sa.z1Mm(), sb.z1Mm()) - Math.max(sa.z0Mm(), sb.z0Mm()) > Z_TOLERANCE_MM
-                        && sa.region().geometry().getEnvelopeInternal().intersects(sb.region().geometry().getEnvelopeInternal())) {
-                    worst = Math.max(worst, sa.region().intersect(sb.region()).areaMm2());
+        for (RadialProfile.Band sa : a.bands()) {
+            for (RadialProfile.Band sb : b.bands()) {
+                if (sa.overlapsInZ(sb) && sa.boxOverlaps(sb)) {
+                    double area = cache.computeIfAbsent(new AreaKey(sa.region(), sb.region()),
+                            k -> k.a().intersect(k.b()).areaMm2());
+                    worst = Math.max(worst, area);
                 }
             }
         }
         return worst;
-    }
-
-    static double radialGap(LayeredSolid rot, LayeredSolid fixed) {
-        double gap = Double.POSITIVE_INFINITY;
-        for (Slab sa : rot.slabs()) {
-            for (Slab sb : fixed.slabs()) {
-                if (Math.min(sa.z1Mm(), sb.z1Mm()) - Math.max(sa.z0Mm(), sb.z0Mm()) > Z_TOLERANCE_MM) {
-                    gap = Math.min(gap, sa.region().geometry().distance(sb.region().geometry()));
-                }
-            }
-        }
-        return gap;
-    }
-
-    static double axialGap(LayeredSolid rot, LayeredSolid fixed) {
-        double gap = Double.POSITIVE_INFINITY;
-        for (Slab sa : rot.slabs()) {
-            for (Slab sb : fixed.slabs()) {
-                if (sa.region().intersect(sb.region()).areaMm2() > AREA_TOLERANCE_MM2) {
-                    double g = Math.max(sb.z0Mm() - sa.z1Mm(), sa.z0Mm() - sb.z1Mm());
-                    gap = Math.min(gap, Math.max(0, g));
-                }
-            }
-        }
-        return gap;
     }
 }

@@ -73,7 +73,7 @@ public record Kit(String name, Dims dims, List<KitPart> parts, List<PrintPlates.
         List<Body> bodies = new ArrayList<>();
         for (KitPart p : parts) {
             for (int k = 0; k < p.count(); k++) {
-                bodies.add(new Body(p.name() + " #" + (k + 1), p.family(), p.rotating(),
+                bodies.add(new Body(p.name() + " #" + (k + 1), p.family(), p.rotating(), p.family().equals("bearing"),
                         p.placements().get(k).apply(p.solid())));
             }
         }

@@ -48,7 +48,7 @@ public final class CheckCommand implements Callable<Integer> {
     public Integer call() {
         Spec spec = SpecReader.read(specFile).orThrow();
         ResolvedDesign design = DesignResolver.resolve(spec, profileOptions.load());
-        RunawaySource runaway = RunawaySource.lockedFlowBound();
+        RunawaySource runaway = RunawaySource.performanceModelOrBound();
         List<Finding> findings = new ArrayList<>(CheckCatalog.run(design, runaway));
         if (!noParts) {
             double chord = design.key("output.chord-tolerance").flatMap(design::find)

@@ -4,7 +4,6 @@ import static org.shearstack.rules.geometry.GeoKeys.*;
 
 import java.util.Locale;
 
-import org.shearstack.rules.geometry.FastenerCatalog;
 import org.shearstack.rules.geometry.GeoKeys;
 
 /**
@@ -23,7 +22,8 @@ public record Dims(
         double endSpacerBore, double endSpacerLand, double endSpacerLandHeight,
         double coverExhaustInner, double coverExhaustOuter, int coverExhaustCount, double coverExhaustWeb,
         double wall, double plenumDiameter, double plenumRadius, String sealKind, double grooveDepth,
-        double grooveWidth, double grooveInner, double oRingInner, double cordLength,
+        double grooveWidth, double grooveInner, double oRingInner, double cordLength, String oRing,
+        double oRingCrossSection, double insertLength,
         String fastener, String anchor, double boltClearance, double boltHead, double anchorHole, double anchorDepth,
         double nutAcrossFlats, double boltCircle, int boltCount, double housingOutside, double boltLength,
         String portThread, double portPilot, double portPilotDepth, double portFeed, double coverThickness,
@@ -32,7 +32,8 @@ public record Dims(
         boolean generator, double couplingDiameter, double couplingHub, double tongueHeight, double tongueWidth,
         double couplingDisc, double turbineBore, double generatorBore, double couplingClearance,
         double bracketStandoff, double bracketSeat, double bracketWall, double bracketPlate, double bracketCup,
-        double bracketScrewHole, double bracketCentreHole, double motorSpacing, String motorScrews,
+        double bracketScrewHole, double bracketCentreHole, double bracketScrewLength, double motorSpacing,
+        String motorScrews,
         double targetDiameter, double targetThickness, double stubLength, double driveLength,
         double layerHeight, double lineWidth, double holeCompensation) {
 
@@ -56,7 +57,8 @@ public record Dims(
                 v.get(COVER_EXHAUST_INNER), v.get(COVER_EXHAUST_OUTER), (int) Math.round(v.get(COVER_EXHAUST_COUNT)),
                 v.get(COVER_EXHAUST_WEB), v.get(WALL), v.get(PLENUM_DIAMETER), v.get(PLENUM_RADIUS),
                 v.text(SEAL_KIND), v.get(GROOVE_DEPTH), v.get(GROOVE_WIDTH), v.get(GROOVE_INNER_DIAMETER),
-                v.get(ORING_INNER_DIAMETER), v.get(CORD_LENGTH),
+                v.get(ORING_INNER_DIAMETER), v.get(CORD_LENGTH), v.text(ORING_DESIGNATION), v.get(ORING_CROSS_SECTION),
+                v.get(INSERT_LENGTH),
                 v.has(FASTENER_SIZE) ? v.text(FASTENER_SIZE) : "M3",
                 v.has(FASTENER_ANCHOR) ? v.text(FASTENER_ANCHOR).trim().toLowerCase(Locale.ROOT) : "heat-set",
                 v.get(BOLT_CLEARANCE), v.get(BOLT_HEAD_DIAMETER), v.get(BOLT_ANCHOR_HOLE), v.get(BOLT_ANCHOR_DEPTH),
@@ -70,7 +72,7 @@ public record Dims(
                 v.get(COUPLING_TONGUE_WIDTH), v.get(COUPLING_DISC_THICKNESS), v.get(COUPLING_TURBINE_BORE),
                 v.get(COUPLING_GENERATOR_BORE), v.get(COUPLING_CLEARANCE),
                 v.get(BRACKET_STANDOFF), v.get(BRACKET_SEAT_DIAMETER), v.get(BRACKET_WALL), v.get(BRACKET_PLATE),
-                v.get(BRACKET_CUP_HEIGHT), v.get(BRACKET_SCREW_HOLE), v.get(BRACKET_CENTRE_HOLE),
+                v.get(BRACKET_CUP_HEIGHT), v.get(BRACKET_SCREW_HOLE), v.get(BRACKET_CENTRE_HOLE), v.get(BRACKET_SCREW_LENGTH),
                 gen ? v.get(GENERATOR_MOUNT_SPACING) : 0, gen ? v.text(GENERATOR_MOUNT_SCREWS) : "",
                 v.get(TARGET_DIAMETER), v.get(TARGET_THICKNESS), v.get(STUB_LENGTH), v.get(DRIVE_LENGTH),
                 v.get(LAYER_HEIGHT), v.get(LINE_WIDTH), v.get(HOLE_COMPENSATION));
@@ -131,10 +133,6 @@ public record Dims(
     /** Radius where the exhaust ports start: an end spacer stays inside it. */
     public double portInnerRadius() {
         return portCircleDiameter / 2 - portDiameter / 2;
-    }
-
-    public FastenerCatalog.Fastener screw() {
-        return FastenerCatalog.bySize(fastener).orElseThrow();
     }
 
     /** The bottom of the coupling's turbine hub (a running gap above the drive cover). */

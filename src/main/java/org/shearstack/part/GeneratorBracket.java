@@ -7,7 +7,6 @@ import org.shearstack.geom.GeometryContext;
 import org.shearstack.geom.LayeredSolid;
 import org.shearstack.geom.Region;
 import org.shearstack.geom.Slab;
-import org.shearstack.rules.geometry.FastenerCatalog;
 
 /**
  * The generator bracket, printed flange down: a flange ring on the housing screws joined by spokes to a
@@ -69,11 +68,5 @@ public final class GeneratorBracket {
                 new Slab(w0, w1, windowed), new Slab(w1, standoff, tube),
                 new Slab(standoff, standoff + plate, motorPlate),
                 new Slab(standoff + plate, standoff + plate + d.bracketCup(), cup)));
-    }
-
-    /** Screws that hold the motor's face to the plate (nominal length: plate + 3 × diameter, standard). */
-    public static double motorScrewLength(Dims d) {
-        double dia = FastenerCatalog.bySize(d.motorScrews()).map(FastenerCatalog.Fastener::nominalMm).orElse(2.5);
-        return FastenerCatalog.standardLengthAtMost(d.bracketPlate() + 2 * dia).orElse(4.0);
     }
 }

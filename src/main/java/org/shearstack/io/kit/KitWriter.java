@@ -67,19 +67,40 @@ public final class KitWriter {
         }
     }
 
+    /** One file to write. */
+    @FunctionalInterface
+    private interface FileJob {
+        void write() throws IOException;
+    }
+
+    /** Writes every file; the files are independent, so they are written in parallel (order of bytes unaffected). */
     private static void writeInto(Kit kit, Path dir) throws IOException {
         Files.createDirectories(dir.resolve("parts"));
         Files.createDirectories(dir.resolve("plates"));
-        for (KitPart p : kit.printedParts()) {
-            StlWriter.write(p.mesh(), kit.name() + " " + p.name(), dir.resolve("parts").resolve(p.name() + ".stl"));
-        }
-        ThreeMfWriter.write(assembly(kit, false), dir.resolve("assembly.3mf"));
-        ThreeMfWriter.write(assembly(kit, true), dir.resolve("assembly-exploded.3mf"));
+        List<FileJob> jobs = new ArrayList<>();
+        ThreeMfWriter.MeshTexts texts = new ThreeMfWriter.MeshTexts();
+        jobs.add(() -> ThreeMfWriter.write(assembly(kit, false), dir.resolve("assembly.3mf"), texts));
+        jobs.add(() -> ThreeMfWriter.write(assembly(kit, true), dir.resolve("assembly-exploded.3mf"), texts));
         for (PrintPlates.Plate plate : kit.plates()) {
-            ThreeMfWriter.write(plate(kit, plate),
-                    dir.resolve("plates").resolve(String.format(Locale.ROOT, "plate-%d.3mf", plate.number())));
+            jobs.add(() -> ThreeMfWriter.write(plate(kit, plate),
+                    dir.resolve("plates").resolve(String.format(Locale.ROOT, "plate-%d.3mf", plate.number())), texts));
         }
-        Files.writeString(dir.resolve("bom.csv"), bomCsv(kit), StandardCharsets.UTF_8);
+        for (KitPart p : kit.printedParts()) {
+            jobs.add(() -> StlWriter.write(p.mesh(), kit.name() + " " + p.name(),
+                    dir.resolve("parts").resolve(p.name() + ".stl")));
+        }
+        jobs.add(() -> Files.writeString(dir.resolve("bom.csv"), bomCsv(kit), StandardCharsets.UTF_8));
+        try {
+            jobs.parallelStream().forEach(j -> {
+                try {
+                    j.write();
+                } catch (IOException e) {
+                    throw new UncheckedIOException(e);
+                }
+            });
+        } catch (UncheckedIOException e) {
+            throw e.getCause();
+        }
     }
 
     /** The assembly: one mesh object per distinct part, one assembly object with a component per copy. */

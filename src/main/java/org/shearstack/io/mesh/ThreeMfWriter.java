@@ -43,8 +43,38 @@ public final class ThreeMfWriter {
     }
 
     public static void write(ThreeMfModel model, OutputStream out) throws IOException {
+        write(model, out, new MeshTexts());
+    }
+
+    /**
+     * The {@code <mesh>} XML of meshes, formatted once and shared by every package written with the same
+     * instance (an assembly, its exploded variant and the print plates hold the same meshes). Thread-safe; keyed
+     * by mesh identity.
+     */
+    public static final class MeshTexts {
+        private final java.util.Map<Mesh, String> byMesh = new java.util.IdentityHashMap<>();
+
+        String of(Mesh mesh) throws IOException {
+            synchronized (byMesh) {
+                String s = byMesh.get(mesh);
+                if (s != null) {
+                    return s;
+                }
+            }
+            java.io.StringWriter sw = new java.io.StringWriter(64 * mesh.triangleCount() + 64 * mesh.vertexCount());
+            writeMesh(mesh, sw);
+            String s = sw.toString();
+            synchronized (byMesh) {
+                byMesh.putIfAbsent(mesh, s);
+            }
+            return s;
+        }
+    }
+
+    /** As {@link #write(ThreeMfModel, OutputStream)}, sharing formatted meshes through {@code texts}. */
+    public static void write(ThreeMfModel model, OutputStream out, MeshTexts texts) throws IOException {
         ZipOutputStream zip = new ZipOutputStream(new NonClosing(out), StandardCharsets.UTF_8);
-        zip.setLevel(Deflater.DEFAULT_COMPRESSION);
+        zip.setLevel(Deflater.BEST_SPEED); // fixed level: same bytes on every run
         boolean thumb = model.thumbnailPng() != null;
         entry(zip, "[Content_Types].xml");
         text(zip, contentTypes(thumb));
@@ -52,7 +82,7 @@ public final class ThreeMfWriter {
         text(zip, rels(thumb));
         entry(zip, MODEL_ENTRY);
         Writer w = new BufferedWriter(new OutputStreamWriter(new NonClosing(zip), StandardCharsets.UTF_8), 1 << 16);
-        writeModel(model, w);
+        writeModel(model, w, texts);
         w.flush();
         if (thumb) {
             entry(zip, THUMBNAIL_ENTRY);
@@ -75,11 +105,16 @@ public final class ThreeMfWriter {
 
     /** Writes atomically: to a temporary file beside the target, then renamed over it. */
     public static void write(ThreeMfModel model, Path file) throws IOException {
+        write(model, file, new MeshTexts());
+    }
+
+    /** As {@link #write(ThreeMfModel, Path)}, sharing formatted meshes through {@code texts}. */
+    public static void write(ThreeMfModel model, Path file, MeshTexts texts) throws IOException {
         Path dir = file.toAbsolutePath().getParent();
         Path tmp = Files.createTempFile(dir, ".3mf-", ".part");
         try {
             try (OutputStream out = new BufferedOutputStream(Files.newOutputStream(tmp), 1 << 16)) {
-                write(model, out);
+                write(model, out, texts);
             }
             Files.move(tmp, file, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
         } finally {
@@ -91,7 +126,7 @@ public final class ThreeMfWriter {
     public static String modelXml(ThreeMfModel model) {
         java.io.StringWriter sw = new java.io.StringWriter();
         try {
-            writeModel(model, sw);
+            writeModel(model, sw, new MeshTexts());
         } catch (IOException e) {
             throw new IllegalStateException(e);
         }
@@ -126,7 +161,7 @@ public final class ThreeMfWriter {
                 + "</Relationships>\n";
     }
 
-    private static void writeModel(ThreeMfModel model, Writer w) throws IOException {
+    private static void writeModel(ThreeMfModel model, Writer w, MeshTexts texts) throws IOException {
         boolean own = model.metadata().keySet().stream().anyMatch(k -> k.startsWith("shearstack:"));
         w.write("<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n<model unit=\"millimeter\" xml:lang=\"en-US\" xmlns=\"");
         w.write(CORE_NAMESPACE);
@@ -164,7 +199,7 @@ public final class ThreeMfWriter {
                 }
                 w.write("   </components>\n");
             } else {
-                writeMesh(o.mesh(), w);
+                w.write(texts.of(o.mesh()));
             }
             w.write("  </object>\n");
         }

@@ -4,9 +4,9 @@ import static org.shearstack.rules.geometry.GeoKeys.*;
 
 import java.util.List;
 
+import org.shearstack.profile.FastenerTable;
 import org.shearstack.rules.RuleInputs;
 import org.shearstack.rules.RuleOutputs;
-import org.shearstack.rules.geometry.FastenerCatalog.Fastener;
 
 /**
  * GEO-BOLT-LENGTH: the housing screws pass the bracket flange (when there is a generator), the drive cover
@@ -15,14 +15,16 @@ import org.shearstack.rules.geometry.FastenerCatalog.Fastener;
  */
 public final class BoltLengthRule extends GeoRule {
 
-    public BoltLengthRule() {
+    private final FastenerTable table;
+
+    public BoltLengthRule(FastenerTable table) {
         super("GEO-BOLT-LENGTH", List.of(COVER_THICKNESS, CHAMBER_DEPTH, BRACKET_PLATE, FASTENER_SIZE, FASTENER_ANCHOR,
-                BOLT_ANCHOR_DEPTH), List.of(BOLT_LENGTH));
+                BOLT_ANCHOR_DEPTH, INSERT_LENGTH), List.of(BOLT_LENGTH));
+        this.table = table;
     }
 
     @Override
     public void apply(RuleInputs in, RuleOutputs out) {
-        Fastener f = FastenerRule.fastener(in);
         double cover = in.get(COVER_THICKNESS);
         double grip = in.get(BRACKET_PLATE) + cover + in.get(CHAMBER_DEPTH);
         double max;
@@ -37,13 +39,12 @@ public final class BoltLengthRule extends GeoRule {
                 how = "grip + free cover − 0.5 mm";
             }
             default -> {
-                max = grip + f.insertLengthMm();
+                max = grip + in.get(INSERT_LENGTH);
                 how = "grip + insert length";
             }
         }
-        double length = FastenerCatalog.standardLengthAtMost(max).orElse(FastenerCatalog.STANDARD_LENGTHS_MM.get(0));
+        double length = FastenerRule.standardLengthAtMost(table, max);
         out.put(BOLT_LENGTH, length, "longest standard length ≤ " + how
-                        + "; grip = bracket flange + drive cover + housing ring",
-                "ISO 4762 standard lengths (from memory)");
+                        + "; grip = bracket flange + drive cover + housing ring", table.lengthsSource());
     }
 }

@@ -6,7 +6,8 @@ import java.util.List;
 
 import org.shearstack.rules.RuleInputs;
 import org.shearstack.rules.RuleOutputs;
-import org.shearstack.rules.geometry.FastenerCatalog.Fastener;
+import org.shearstack.profile.Fastener;
+import org.shearstack.profile.FastenerTable;
 
 /**
  * GEO-DRIVE-TRAIN: the Oldham coupling (three pieces: two hubs with tongues and a centre disc with crossed
@@ -19,15 +20,18 @@ public final class DriveTrainRule extends GeoRule {
     /** Axial running gap between coupling pieces and to fixed parts (common practice). */
     static final double AXIAL_GAP_MM = 0.5;
 
-    public DriveTrainRule() {
+    private final FastenerTable table;
+
+    public DriveTrainRule(FastenerTable table) {
         super("GEO-DRIVE-TRAIN", List.of(JOURNAL_DIAMETER, HOLE_COMPENSATION, LINE_WIDTH, LAYER_HEIGHT,
                         COVER_EXHAUST_INNER, GENERATOR_BODY_DIAMETER, GENERATOR_BODY_LENGTH, GENERATOR_SHAFT_DIAMETER,
                         GENERATOR_MOUNT_SCREWS, GENERATOR_MOUNT_SPACING),
                 List.of(COUPLING_DIAMETER, COUPLING_HUB_THICKNESS, COUPLING_TONGUE_HEIGHT, COUPLING_TONGUE_WIDTH,
                         COUPLING_DISC_THICKNESS, COUPLING_TURBINE_BORE, COUPLING_GENERATOR_BORE, COUPLING_CLEARANCE,
                         BRACKET_STANDOFF, BRACKET_SEAT_DIAMETER, BRACKET_WALL, BRACKET_PLATE, BRACKET_CUP_HEIGHT,
-                        BRACKET_SCREW_HOLE, BRACKET_CENTRE_HOLE, TARGET_DIAMETER, TARGET_THICKNESS, STUB_LENGTH,
-                        DRIVE_LENGTH));
+                        BRACKET_SCREW_HOLE, BRACKET_CENTRE_HOLE, BRACKET_SCREW_LENGTH, TARGET_DIAMETER,
+                        TARGET_THICKNESS, STUB_LENGTH, DRIVE_LENGTH));
+        this.table = table;
     }
 
     @Override
@@ -50,7 +54,7 @@ public final class DriveTrainRule extends GeoRule {
             for (var k : List.of(COUPLING_DIAMETER, COUPLING_HUB_THICKNESS, COUPLING_TONGUE_HEIGHT,
                     COUPLING_TONGUE_WIDTH, COUPLING_DISC_THICKNESS, COUPLING_TURBINE_BORE, COUPLING_GENERATOR_BORE,
                     COUPLING_CLEARANCE, BRACKET_STANDOFF, BRACKET_SEAT_DIAMETER, BRACKET_WALL, BRACKET_PLATE,
-                    BRACKET_CUP_HEIGHT, BRACKET_SCREW_HOLE, BRACKET_CENTRE_HOLE)) {
+                    BRACKET_CUP_HEIGHT, BRACKET_SCREW_HOLE, BRACKET_CENTRE_HOLE, BRACKET_SCREW_LENGTH)) {
                 out.put(k, 0, none, "spec");
             }
             out.put(DRIVE_LENGTH, Quanta.up(2 * d, layer), "2 × journal: a bare drive stub", PRACTICE);
@@ -78,9 +82,7 @@ public final class DriveTrainRule extends GeoRule {
 
         double bracketWall = Quanta.up(Math.max(1.6, 4 * lw), lw);
         double plate = Quanta.up(3.0, layer);
-        Fastener screw = FastenerCatalog.bySize(in.text(GENERATOR_MOUNT_SCREWS)).orElseThrow(
-                () -> new IllegalArgumentException("generator.mount-screws: expected a size from M2 to M8, found '"
-                        + in.text(GENERATOR_MOUNT_SCREWS) + "'"));
+        Fastener screw = FastenerRule.size(table, in, GENERATOR_MOUNT_SCREWS, "M2.5");
         double screwHole = screw.clearanceMediumMm() + hc;
         double spacing = in.get(GENERATOR_MOUNT_SPACING);
         double body = in.get(GENERATOR_BODY_DIAMETER);
@@ -91,6 +93,9 @@ public final class DriveTrainRule extends GeoRule {
         out.put(BRACKET_PLATE, plate, "3 mm in whole layers (also the flange)", PRACTICE);
         out.put(BRACKET_CUP_HEIGHT, Quanta.up(0.4 * in.get(GENERATOR_BODY_LENGTH), layer),
                 "40 % of the motor body length in whole layers", PRACTICE);
+        out.put(BRACKET_SCREW_LENGTH, FastenerRule.standardLengthAtMost(table, plate + 2 * screw.nominalMm()),
+                "longest standard length ≤ plate + 2 × screw diameter (thread into the motor face)",
+                table.lengthsSource() + "; " + PRACTICE);
         out.put(BRACKET_SCREW_HOLE, screwHole, "ISO 273 medium clearance of the motor screws + hole compensation",
                 "ISO 273 (standards.md §3.1)");
         double centre = Math.min(Math.max(genShaft + 3, 0.25 * body), spacing - screwHole - 2 * bracketWall) + hc;

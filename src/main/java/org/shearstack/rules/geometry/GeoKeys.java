@@ -131,6 +131,9 @@ public final class GeoKeys {
     public static final Key GROOVE_INNER_DIAMETER = len("seal.groove-inner-diameter");
     public static final Key ORING_INNER_DIAMETER = len("seal.o-ring-inner-diameter");
     public static final Key CORD_LENGTH = len("seal.cord-length");
+    /** The chosen O-ring, "ID × CS" in mm (empty without an O-ring): the bill of materials prints it as is. */
+    public static final Key ORING_DESIGNATION = text("seal.o-ring");
+    public static final Key ORING_CROSS_SECTION = len("seal.o-ring-cross-section");
     public static final Key BOLT_CLEARANCE = len("bolt.clearance-diameter");
     public static final Key BOLT_HEAD_DIAMETER = len("bolt.head-diameter");
     public static final Key BOLT_ANCHOR_HOLE = len("bolt.anchor-hole-diameter");
@@ -145,6 +148,8 @@ public final class GeoKeys {
     public static final Key PORT_FEED_DIAMETER = len("port.feed-diameter");
     public static final Key COVER_THICKNESS = len("cover.thickness");
     public static final Key BOLT_LENGTH = len("bolt.length");
+    /** Length of a heat-set insert (0 for other anchors). */
+    public static final Key INSERT_LENGTH = len("bolt.insert-length");
 
     // ------------------------------------------------------------------ outputs: nozzle
     public static final Key NOZZLE_HEIGHT = len("nozzle.slot-height");
@@ -172,6 +177,7 @@ public final class GeoKeys {
     public static final Key BRACKET_CUP_HEIGHT = len("bracket.cup-height");
     public static final Key BRACKET_SCREW_HOLE = len("bracket.screw-hole-diameter");
     public static final Key BRACKET_CENTRE_HOLE = len("bracket.centre-hole-diameter");
+    public static final Key BRACKET_SCREW_LENGTH = len("bracket.motor-screw-length");
     public static final Key TARGET_DIAMETER = len("target.outside-diameter");
     public static final Key TARGET_THICKNESS = len("target.thickness");
 }

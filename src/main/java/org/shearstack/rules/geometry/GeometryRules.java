@@ -2,26 +2,25 @@ package org.shearstack.rules.geometry;
 
 import java.util.List;
 
+import org.shearstack.profile.Hardware;
+import org.shearstack.profile.Profiles;
 import org.shearstack.rules.Rule;
 
-/** The geometric (GEO-) rules: from sized rotor, printer and hardware to every dimension the parts need. */
+/**
+ * The geometric (GEO-) rules: from sized rotor, printer and hardware to every dimension the parts need. The
+ * hardware (bearings, screws, O-ring glands, ports) comes from the profile tables ({@link Profiles#hardware()}).
+ */
 public final class GeometryRules {
 
     private GeometryRules() {
     }
 
-    /**
-     * The same rules; the hardware tables they use are built in ({@link BearingCatalog}, {@link FastenerCatalog},
-     * {@link GlandCatalog}, {@link PortCatalog}) while the profile hardware tables are empty.
-     */
-    public static List<Rule> rules(org.shearstack.profile.Profiles profiles) {
-        return rules();
-    }
-
-    public static List<Rule> rules() {
-        return List.of(new DiscLimitsRule(), new AxialStackRule(), new ChamberRule(), new BearingRule(),
+    public static List<Rule> rules(Profiles profiles) {
+        Hardware h = profiles.hardware();
+        return List.of(new DiscLimitsRule(), new AxialStackRule(), new ChamberRule(), new BearingRule(h.bearings()),
                 new BearingSeatRule(), new HubKeyRule(), new ExhaustPortRule(), new SpacerRule(),
-                new CoverExhaustRule(), new FastenerRule(), new InletPortRule(), new HousingLayoutRule(),
-                new CoverRule(), new NozzleSlotRule(), new DriveTrainRule(), new BoltLengthRule());
+                new CoverExhaustRule(), new FastenerRule(h.fasteners()), new InletPortRule(h.ports()),
+                new HousingLayoutRule(h.fasteners(), h.seals()), new CoverRule(), new NozzleSlotRule(),
+                new DriveTrainRule(h.fasteners()), new BoltLengthRule(h.fasteners()));
     }
 }

@@ -17,10 +17,14 @@ import org.shearstack.physics.rotor.Calibration;
 import org.shearstack.physics.rotor.OperatingPoint;
 import org.shearstack.physics.rotor.PerformanceCurve;
 import org.shearstack.physics.rotor.TurbineModel;
+import org.shearstack.rules.InputRejectedException;
 import org.shearstack.rules.Key;
 import org.shearstack.rules.Rule;
 import org.shearstack.rules.RuleInputs;
 import org.shearstack.rules.RuleOutputs;
+import org.shearstack.rules.SpecKeys;
+import org.shearstack.spec.Dimension;
+import org.shearstack.spec.QuantityFormat;
 
 /**
  * SIZE-PERFORMANCE: runs the coupled model of the design as built and writes its headline figures: runaway speed
@@ -32,7 +36,7 @@ import org.shearstack.rules.RuleOutputs;
 final class PerformanceRule implements Rule {
 
     private static final String SOURCE = "coupled supply–nozzle–disc-pack model (physics.md §1–§3, §12; derived)";
-    private static final int CURVE_POINTS = 30;
+    private static final int CURVE_POINTS = 20;
 
     @Override
     public String id() {
@@ -58,6 +62,15 @@ final class PerformanceRule implements Rule {
     @Override
     public void apply(RuleInputs in, RuleOutputs out) {
         Values v = Values.of(in);
+        if (!(in.get(SpecKeys.ROTOR_EXHAUST_DIAMETER) < in.get(SpecKeys.ROTOR_DIAMETER))) {
+            throw new InputRejectedException(SpecKeys.ROTOR_EXHAUST_DIAMETER, "an exhaust diameter below the disc"
+                    + " diameter " + QuantityFormat.format(in.get(SpecKeys.ROTOR_DIAMETER), Dimension.LENGTH),
+                    QuantityFormat.format(in.get(SpecKeys.ROTOR_EXHAUST_DIAMETER), Dimension.LENGTH));
+        }
+        if (in.get(SpecKeys.ROTOR_DISCS) < 2) {
+            throw new InputRejectedException(SpecKeys.ROTOR_DISCS, "at least 2 discs",
+                    QuantityFormat.format(in.get(SpecKeys.ROTOR_DISCS), Dimension.COUNT));
+        }
         TurbineModel model = DesignModels.turbineModel(v, Calibration.nominal());
         PerformanceCurve curve = model.curve(CURVE_POINTS);
         double runaway = curve.runawaySpeedRadPerS();

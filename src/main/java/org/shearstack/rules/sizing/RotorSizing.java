@@ -16,6 +16,7 @@ import java.util.Locale;
 import java.util.OptionalDouble;
 import java.util.TreeSet;
 import org.shearstack.rules.FunctionRule;
+import org.shearstack.rules.InputRejectedException;
 import org.shearstack.rules.Key;
 import org.shearstack.rules.ProfileKeys;
 import org.shearstack.rules.Rule;
@@ -219,6 +220,10 @@ final class RotorSizing {
     }
 
     private static void exhaust(RuleInputs in, RuleOutputs out) {
+        if (in.get(ROTOR_DISCS) < 2) {
+            throw new InputRejectedException(ROTOR_DISCS, "at least 2 discs",
+                    String.format(Locale.ROOT, "%.0f", in.get(ROTOR_DISCS)));
+        }
         SizingModel m = model(in);
         double d = in.get(ROTOR_DIAMETER);
         Trial base = new Trial(d, FIRST_EXHAUST_RATIO * d, in.get(ROTOR_GAP), in.get(ROTOR_DISC_THICKNESS),

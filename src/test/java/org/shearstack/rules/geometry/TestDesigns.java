@@ -18,7 +18,7 @@ public final class TestDesigns {
     }
 
     public static DesignValues resolve(RuleHarness inputs) {
-        RuleHarness h = inputs.run(GeometryRules.rules());
+        RuleHarness h = inputs.run(GeometryRulesTest.rules());
         return DesignValues.of(h::get, h.texts::get, k -> h.numbers.containsKey(k) || h.texts.containsKey(k));
     }
 

@@ -45,7 +45,7 @@ class SizingRulesTest {
 
     static Engine engine() {
         List<Rule> rules = new ArrayList<>(PrinterRules.rules());
-        rules.addAll(GeometryRules.rules());
+        rules.addAll(GeometryRules.rules(org.shearstack.profile.Profiles.shipped()));
         rules.addAll(SizingRules.rules());
         return Engine.of(rules);
     }
@@ -111,6 +111,22 @@ class SizingRulesTest {
         List<String> p = e.problems().stream().map(Problem::format).toList();
         assertTrue(p.stream().anyMatch(s -> s.contains("supply.conductance: expected one of supply.conductance,"
                 + " supply.free-air-flow or supply.blowdown")), String.join("\n", p));
+    }
+
+    @Test
+    void impossibleSupplyAndPackValuesAreLocatedBadInput() {
+        BadInputException up = assertThrows(BadInputException.class, () -> resolve(String.join("\n",
+                "name: x", "supply:", "  pressure: 3 bar(g)", "  blowdown:", "    tank: 24 L", "    from: 5 bar(g)",
+                "    to: 8 bar(g)", "    time: 10 s", "")));
+        assertTrue(up.problems().stream().map(Problem::format).anyMatch(
+                s -> s.contains("supply.blowdown.to: expected")),
+                up.problems().toString());
+        BadInputException ex = assertThrows(BadInputException.class,
+                () -> resolve(TARGET_SPEC.replace("  diameter: 80 mm\n", "  exhaust-diameter: 300 mm\n")));
+        // the diameter is sized (about 60 mm at 15 000 rpm), so only the SIZE- rule can see the contradiction
+        assertTrue(ex.problems().stream().map(Problem::format).anyMatch(
+                s -> s.contains("rotor.exhaust-diameter: expected an exhaust diameter below the disc diameter")),
+                ex.problems().toString());
     }
 
     @Test
