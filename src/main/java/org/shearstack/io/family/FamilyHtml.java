@@ -1,6 +1,5 @@
 package org.shearstack.io.family;
 
-import java.util.List;
 import java.util.Locale;
 
 /**
@@ -171,16 +170,5 @@ public final class FamilyHtml {
     private static String fixed(double v, int decimals) {
         String s = String.format(Locale.ROOT, "%." + decimals + "f", v);
         return s.matches("-0(\\.0*)?") ? s.substring(1) : s;
-    }
-
-    /** The table's cells as shown (tests read them back). */
-    static List<String> shownFigures(FamilyRow r) {
-        double[] figs = r.figures();
-        java.util.ArrayList<String> out = new java.util.ArrayList<>();
-        for (int i = 0; i < figs.length; i++) {
-            FamilyColumns.Figure f = FamilyColumns.FIGURES.get(i);
-            out.add(format(figs[i], f.digits(), f.roundDown()));
-        }
-        return out;
     }
 }
