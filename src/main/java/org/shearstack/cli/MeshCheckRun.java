@@ -25,7 +25,7 @@ import org.shearstack.spec.Problem;
 /** {@code check FILE.stl|FILE.3mf --printer NAME}: validity, printability by slicing, and interference of a 3MF. */
 final class MeshCheckRun {
 
-    private static final Pattern LINE = Pattern.compile("line (\\d+)");
+    private static final Pattern LINE = Pattern.compile("line (\\d+): ");
 
     private MeshCheckRun() {
     }
@@ -95,7 +95,11 @@ final class MeshCheckRun {
                 message = message.substring(prefix.length());
             }
             Matcher m = LINE.matcher(message);
-            int line = m.find() ? Integer.parseInt(m.group(1)) : 0;
+            int line = 0;
+            if (m.lookingAt()) {
+                line = Integer.parseInt(m.group(1));
+                message = message.substring(m.end());
+            }
             return throwProblem(file, line, message);
         }
     }

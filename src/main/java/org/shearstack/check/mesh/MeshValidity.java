@@ -28,36 +28,36 @@ public final class MeshValidity {
     public static List<Finding> findings(String object, MeshReport r) {
         List<Finding> out = new ArrayList<>();
         if (r.triangleCount() == 0) {
-            out.add(fail("MESH-OPEN", "The mesh has no triangles.", 0, object, "re-export the object"));
+            out.add(fail("MESH-OPEN", "The mesh has no triangles.", 0, "triangles", object, "re-export the object"));
             return out;
         }
         if (r.nonFiniteCoordinates() > 0) {
             out.add(fail("MESH-NONFINITE", r.nonFiniteCoordinates() + " coordinates are not finite numbers.",
-                    r.nonFiniteCoordinates(), object, "re-export the object from its CAD program"));
+                    r.nonFiniteCoordinates(), "coordinates", object, "re-export the object from its CAD program"));
         }
         if (r.openEdges() > 0) {
             out.add(fail("MESH-OPEN", r.openEdges() + " edges have no triangle across them: the surface has holes"
-                    + " and does not enclose a solid.", r.openEdges(), object,
+                    + " and does not enclose a solid.", r.openEdges(), "edges", object,
                     "close the holes (repair the mesh) and export again"));
         }
         if (r.duplicateEdges() > 0) {
             out.add(fail("MESH-ORIENTATION", r.duplicateEdges() + " directed edges are used twice: triangles are"
                     + " wound against their neighbours, or more than two triangles share an edge.", r.duplicateEdges(),
-                    object, "make the normals consistent (repair the mesh) and split touching bodies"));
+                    "edges", object, "make the normals consistent (repair the mesh) and split touching bodies"));
         } else if (r.isClosedManifold() && !(r.signedVolumeMm3() > 0)) {
             out.add(fail("MESH-ORIENTATION", "The enclosed volume is " + Findings.num(r.signedVolumeMm3(), 4)
-                    + " mm³: the mesh is inside out (normals point inward).", r.signedVolumeMm3(), object,
-                    "flip the normals"));
+                    + " mm³: the mesh is inside out (normals point inward).", r.signedVolumeMm3(), "mm3",
+                    object, "flip the normals"));
         }
         if (r.degenerateTriangles() > 0) {
             out.add(Findings.of("MESH-DEGENERATE", Severity.CAUTION, r.degenerateTriangles()
-                    + " triangles have zero area (repeated or collinear corners).", r.degenerateTriangles(), 0, "",
+                    + " triangles have zero area (repeated or collinear corners).", r.degenerateTriangles(), 0, "triangles",
                     Double.NaN, object, "triangles", "remove them (most slicers do) or export again"));
         }
         if (r.pinchedVertices() > 0) {
             out.add(Findings.of("MESH-PINCHED", Severity.CAUTION, r.pinchedVertices()
                     + " vertices join bodies that touch at a single point; they print as separate bodies joined by"
-                    + " nothing.", r.pinchedVertices(), 0, "", Double.NaN, object, "vertices",
+                    + " nothing.", r.pinchedVertices(), 0, "vertices", Double.NaN, object, "vertices",
                     "separate the bodies or join them with real material"));
         }
         if (out.stream().noneMatch(f -> f.severity() == Severity.FAIL)) {
@@ -74,7 +74,7 @@ public final class MeshValidity {
         return r.isClosedManifold() && r.nonFiniteCoordinates() == 0 && r.signedVolumeMm3() > 0;
     }
 
-    private static Finding fail(String code, String message, double count, String object, String remedy) {
-        return Findings.of(code, Severity.FAIL, message, count, 0, "", Double.NaN, object, "mesh", remedy);
+    private static Finding fail(String code, String message, double count, String unit, String object, String remedy) {
+        return Findings.of(code, Severity.FAIL, message, count, 0, unit, Double.NaN, object, "mesh", remedy);
     }
 }
