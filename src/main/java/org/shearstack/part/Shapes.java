@@ -91,6 +91,15 @@ public final class Shapes {
         return Region.polygon(ctx, pts);
     }
 
+    /**
+     * The region without its parts narrower than {@code widthMm} (a morphological opening): where the jet's
+     * channel meets the chamber at a shallow angle it leaves a knife edge no nozzle can print; the printer's
+     * minimum wall of two line widths (common practice) is the width kept.
+     */
+    public static Region withoutKnifeEdges(Region r, double widthMm) {
+        return r.offset(-widthMm / 2).offset(widthMm / 2).intersect(r);
+    }
+
     /** The insert block around the channel: wider at the plenum so pressure wedges it in place. */
     public static Region nozzleBlock(GeometryContext ctx, Dims d, double growMm) {
         NozzleLine n = NozzleLine.of(d);

@@ -42,7 +42,8 @@ public final class DesignScenes {
         return new ViewScene(design.name(), List.of(), List.of(), headlines(design), List.of("parts not requested"));
     }
 
-    static GeometryContext previewContext(ResolvedDesign design) {
+    /** The spec's chord tolerance, but no finer than {@link #PREVIEW_CHORD_TOLERANCE_MM}. */
+    public static GeometryContext previewContext(ResolvedDesign design) {
         double tolerance = design.key("output.chord-tolerance").flatMap(design::find)
                 .map(t -> Math.max(t, PREVIEW_CHORD_TOLERANCE_MM)).orElse(PREVIEW_CHORD_TOLERANCE_MM);
         return GeometryContext.withChordTolerance(tolerance);

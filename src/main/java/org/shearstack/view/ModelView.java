@@ -30,6 +30,9 @@ final class ModelView {
 
     private static final Rgb MARKER = Rgb.parse("#e0117f");
 
+    /** The window's spread slider goes to three times the producer's exploded offsets. */
+    static final double MAX_SPREAD = 3;
+
     private final ViewScene scene;
     private final double[] originMm;
     private final Map<String, PartNode> parts = new LinkedHashMap<>();
@@ -149,7 +152,7 @@ final class ModelView {
     }
 
     void setExplode(double fraction) {
-        explode = Math.max(0, Math.min(1, fraction));
+        explode = Math.max(0, Math.min(MAX_SPREAD, fraction));
         parts.values().forEach(p -> p.setExplode(explode));
         placeMarker();
     }
