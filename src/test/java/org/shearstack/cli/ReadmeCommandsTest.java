@@ -104,6 +104,9 @@ class ReadmeCommandsTest {
         if (CHECK_ONLY.contains(cmd) && !args.contains("--check-only")) {
             args.add(1, "--check-only");
         }
+        if (cmd.equals("check") && !args.contains("--no-parts")) {
+            args.add(1, "--no-parts"); // printability of the parts is tested in PartsPrintabilityTest
+        }
         int o = args.indexOf("-o");
         if (o >= 0) {
             args.set(o + 1, outDir.resolve(Path.of(args.get(o + 1)).getFileName()).toString());
