@@ -21,7 +21,7 @@ import org.junit.jupiter.api.io.TempDir;
 /**
  * Every {@code ./shearstack ...} line in the README's code blocks runs in-process and ends with exit code 0
  * (ok) or 3 (a design with a failed check), never 1 (internal error) or 2 (bad input), so the documented
- * commands cannot rot. Cheap variants: {@code --check-only} where the command has it, outputs into a
+ * commands cannot rot. Cheap variants: {@code --check-only} / {@code --no-parts} where the command has them, outputs into a
  * temporary folder; {@code view} (needs a display) and lines naming the user's own files (which the README
  * shows as placeholders, e.g. {@code my-run.csv}) are skipped.
  */
