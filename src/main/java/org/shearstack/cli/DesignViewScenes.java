@@ -53,6 +53,11 @@ final class DesignViewScenes {
     private static ViewScene of(DesignResult result, Optional<Kit> kit) {
         List<HeadlineFigure> figures = new ArrayList<>();
         result.report().performance().ifPresent(p -> figures.add(operatingPoint(p)));
+        if (result.report().performance().isEmpty()) {
+            // the rules may still have sized an operating point even when the job's model could not run
+            DesignScenes.headlines(result.design()).stream().filter(h -> h.label().equals("operating point"))
+                    .forEach(figures::add);
+        }
         result.report().safety().ifPresent(s -> figures.addAll(safety(s)));
         List<String> notes = new ArrayList<>();
         for (Omission o : result.report().omissions()) {

@@ -33,7 +33,7 @@ public final class HousingRing {
             Region pocket = Shapes.nozzleBlock(ctx, d, d.insertFit());
             return LayeredSolid.extrusion(base.minus(pocket), 0, d.chamberDepth());
         }
-        Region slotted = Shapes.withoutKnifeEdges(base.minus(Shapes.nozzleChannel(ctx, d)), 2 * d.lineWidth());
+        Region slotted = base.minus(Shapes.nozzleChannel(ctx, d));
         return LayeredSolid.of(ctx, List.of(new Slab(0, d.packZ0(), base), new Slab(d.packZ0(), d.packZ1(), slotted),
                 new Slab(d.packZ1(), d.chamberDepth(), base)));
     }

@@ -47,9 +47,11 @@ public final class HubShaft {
 
     /**
      * The hexagon from {@code u0} to {@code u1}, its corners trimmed at the lower end, where it stands on the
-     * narrower journal in print: each layer's trimming circle grows by one layer height over the one below, so
-     * the corners rise at 45° (the 45° overhang rule of FFF printing, common practice) and print without
-     * support. The flats are untouched, so every layer still keys the discs.
+     * narrower journal in print: each corner is cut square to its diagonal by a hexagon turned 30°, whose size
+     * grows by one layer height per layer, so the corners rise at 45° (the 45° overhang rule of FFF printing,
+     * common practice) and print without support. The flats are untouched, so every layer still keys the discs.
+     * Only when the flats themselves stand on the journal (within one layer's step); otherwise the shoulder is
+     * left square (a known gap: such designs get an overhang caution from the printability check).
      */
     static List<Slab> chamferedHex(Dims d, GeometryContext ctx, Region hex, Region bore, double u0, double u1) {
         List<Slab> out = new ArrayList<>();
@@ -57,9 +59,13 @@ public final class HubShaft {
         double corner = d.hexAcrossFlats() / Math.sqrt(3);
         double r = d.journal() / 2;
         double u = u0;
+        if (d.hexAcrossFlats() / 2 > r + layer) {
+            return List.of(new Slab(u0, u1, hex));
+        }
         while (r + layer < corner && u + 2 * layer <= u1) {
             r += layer;
-            out.add(new Slab(u, u + layer, hex.intersect(Region.disc(ctx, 0, 0, 2 * r)).minus(bore)));
+            Region cut = Region.regularPolygon(ctx, 0, 0, 6, 2 * r, 0);
+            out.add(new Slab(u, u + layer, hex.intersect(cut).minus(bore)));
             u += layer;
         }
         out.add(new Slab(u, u1, hex));

@@ -20,7 +20,7 @@ public final class NozzleInsert {
         Region block = Shapes.nozzleBlock(ctx, d, 0)
                 .minus(Region.boreCircle(ctx, 0, 0, d.chamberDiameter()))
                 .minus(Region.boreCircle(ctx, d.plenumRadius(), 0, d.plenumDiameter()));
-        Region slotted = Shapes.withoutKnifeEdges(block.minus(Shapes.nozzleChannel(ctx, d)), 2 * d.lineWidth());
+        Region slotted = block.minus(Shapes.nozzleChannel(ctx, d));
         return LayeredSolid.of(ctx, List.of(new Slab(0, d.packZ0(), block), new Slab(d.packZ0(), d.packZ1(), slotted),
                 new Slab(d.packZ1(), d.chamberDepth(), block)));
     }

@@ -53,7 +53,7 @@ public final class DesignScenes {
      * Operating point, runaway against allowable speed, safe pressure, as far as the design holds them
      * (found by key name ending, so they appear as the rules that make them are added).
      */
-    static List<HeadlineFigure> headlines(ResolvedDesign design) {
+    public static List<HeadlineFigure> headlines(ResolvedDesign design) {
         List<HeadlineFigure> out = new ArrayList<>();
         Optional<String> speed = shown(design, "performance.operating-speed");
         Optional<String> power = shown(design, "performance.operating-power");

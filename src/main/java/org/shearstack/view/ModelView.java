@@ -73,7 +73,7 @@ final class ModelView {
             placed.put(p.name(), m);
             all = all.union(Box3.of(m));
         }
-        ModelView view = new ModelView(scene, all.centre());
+        ModelView view = new ModelView(scene, medianCentre(placed.values()));
         for (ViewPart p : scene.parts()) {
             Mesh m = placed.get(p.name());
             FxMeshArrays arrays;
@@ -94,6 +94,27 @@ final class ModelView {
         }
         view.assemble(all);
         return view;
+    }
+
+    /**
+     * The origin for float coordinates: per axis, the median of the parts' box centres. One part far away
+     * (a file in the wrong unit) then fails with its own name instead of moving every other part out of range.
+     */
+    private static double[] medianCentre(java.util.Collection<Mesh> meshes) {
+        List<double[]> centres = new ArrayList<>();
+        for (Mesh m : meshes) {
+            Box3 b = Box3.of(m);
+            if (!b.isEmpty()) {
+                centres.add(b.centre());
+            }
+        }
+        double[] origin = new double[3];
+        for (int axis = 0; axis < 3 && !centres.isEmpty(); axis++) {
+            final int a = axis;
+            double[] values = centres.stream().mapToDouble(c -> c[a]).sorted().toArray();
+            origin[axis] = values[(values.length - 1) / 2];
+        }
+        return origin;
     }
 
     private void assemble(Box3 all) {
