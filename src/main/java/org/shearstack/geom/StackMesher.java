@@ -40,7 +40,7 @@ final class StackMesher {
     private StackMesher(GeometryContext ctx, int expectedTriangles, boolean assumeNoded) {
         this.ctx = ctx;
         this.assumeNoded = assumeNoded;
-        this.vertices = new VertexTable(ctx.scale());
+        this.vertices = new VertexTable(ctx.scale(), expectedTriangles / 2);
         this.triangles = new IntList(3 * expectedTriangles);
     }
 
@@ -98,8 +98,42 @@ final class StackMesher {
     private record Interface(double z, Geometry below, Geometry above) {
     }
 
-    /** One interface's faces (triangles as grid points, winding fixed) and its node index. */
-    private record Faces(long iz, List<Coordinate[]> triangles, NodeIndex nodes) {
+    /** One interface's faces (triangles as grid points, winding fixed, no height) and its node index. */
+    private record Faces(List<Coordinate[]> triangles, NodeIndex nodes) {
+    }
+
+    /**
+     * The regions on both sides of an interface, equal when both sides are the same geometry or exactly equal
+     * geometries (same rings, same vertex order), which have the same faces and nodes.
+     */
+    private static final class PairKey {
+        private final Geometry below;
+        private final Geometry above;
+        private final int hash;
+
+        PairKey(Geometry below, Geometry above) {
+            this.below = below;
+            this.above = above;
+            this.hash = 31 * shapeHash(below) + shapeHash(above);
+        }
+
+        private static int shapeHash(Geometry g) {
+            return g == null ? 0 : g.getNumPoints() * 31 + g.getEnvelopeInternal().hashCode();
+        }
+
+        private static boolean same(Geometry a, Geometry b) {
+            return a == b || (a != null && b != null && a.getNumPoints() == b.getNumPoints() && a.equalsExact(b));
+        }
+
+        @Override
+        public boolean equals(Object o) {
+            return o instanceof PairKey k && k.hash == hash && same(below, k.below) && same(above, k.above);
+        }
+
+        @Override
+        public int hashCode() {
+            return hash;
+        }
     }
 
     private void run(List<Band> bands) {
@@ -122,13 +156,33 @@ final class StackMesher {
                 interfaces.add(new Interface(b.z1, b.geometry, null));
             }
         }
-        // interfaces are independent: compute them in parallel, then emit in order, so the output (vertex
-        // and triangle order) is the same as a sequential run
-        List<Faces> faces = java.util.stream.IntStream.range(0, interfaces.size()).parallel()
-                .mapToObj(k -> faces(interfaces.get(k))).toList();
-        for (Faces f : faces) {
+        // Interfaces with the same pair of regions (below, above) have the same faces and node set at another
+        // height: each distinct pair is computed once (its first occurrence, in order, so the result does not
+        // depend on scheduling). Distinct interfaces are independent: computed in parallel, then emitted in
+        // order, so the output (vertex and triangle order) is the same as a sequential run.
+        int[] rep = new int[interfaces.size()];
+        List<Integer> distinct = new ArrayList<>();
+        java.util.Map<PairKey, Integer> firstOf = new java.util.HashMap<>();
+        for (int k = 0; k < interfaces.size(); k++) {
+            Interface in = interfaces.get(k);
+            Integer first = firstOf.putIfAbsent(new PairKey(in.below, in.above), distinct.size());
+            if (first == null) {
+                rep[k] = distinct.size();
+                distinct.add(k);
+            } else {
+                rep[k] = first;
+            }
+        }
+        List<Faces> computed = distinct.parallelStream().map(k -> faces(interfaces.get(k))).toList();
+        List<Faces> faces = new ArrayList<>(interfaces.size());
+        for (int k = 0; k < interfaces.size(); k++) {
+            faces.add(computed.get(rep[k]));
+        }
+        for (int k = 0; k < interfaces.size(); k++) {
+            Faces f = faces.get(k);
+            long iz = ctx.gridIndex(interfaces.get(k).z);
             for (Coordinate[] t : f.triangles) {
-                triangles.add(vertex(t[0], f.iz), vertex(t[1], f.iz), vertex(t[2], f.iz));
+                triangles.add(vertex(t[0], iz), vertex(t[1], iz), vertex(t[2], iz));
             }
         }
         for (int i = 0; i < n; i++) {
@@ -163,7 +217,7 @@ final class StackMesher {
         List<Coordinate[]> tris = new ArrayList<>();
         triangulate(up, true, tris);
         triangulate(down, false, tris);
-        return new Faces(ctx.gridIndex(in.z), tris, nodes);
+        return new Faces(tris, nodes);
     }
 
     /**
@@ -216,7 +270,8 @@ final class StackMesher {
     }
 
     private int vertex(Coordinate c, long iz) {
-        return vertices.index(Math.round(c.x * ctx.scale()), Math.round(c.y * ctx.scale()), iz);
+        double scale = ctx.scale(); // grid points: the products are whole numbers
+        return vertices.index((long) Math.rint(c.x * scale), (long) Math.rint(c.y * scale), iz);
     }
 
     private void walls(Band band, NodeIndex bottomNodes, NodeIndex topNodes) {
