@@ -98,8 +98,11 @@ final class StackMesher {
     private record Interface(double z, Geometry below, Geometry above) {
     }
 
-    /** One interface's faces (triangles as grid points, winding fixed, no height) and its node index. */
-    private record Faces(List<Coordinate[]> triangles, NodeIndex nodes) {
+    /**
+     * One interface's faces without height: local vertices (grid indices x, y), triangles on them (winding
+     * fixed), and the interface's node index.
+     */
+    private record Faces(long[] xy, int[] triangles, NodeIndex nodes) {
     }
 
     /**
@@ -181,8 +184,13 @@ final class StackMesher {
         for (int k = 0; k < interfaces.size(); k++) {
             Faces f = faces.get(k);
             long iz = ctx.gridIndex(interfaces.get(k).z);
-            for (Coordinate[] t : f.triangles) {
-                triangles.add(vertex(t[0], iz), vertex(t[1], iz), vertex(t[2], iz));
+            int[] global = new int[f.xy.length / 2];
+            for (int v = 0; v < global.length; v++) {
+                global[v] = vertices.index(f.xy[2 * v], f.xy[2 * v + 1], iz);
+            }
+            int[] c = f.triangles;
+            for (int t = 0; t < c.length; t += 3) {
+                triangles.add(global[c[t]], global[c[t + 1]], global[c[t + 2]]);
             }
         }
         for (int i = 0; i < n; i++) {
@@ -217,7 +225,23 @@ final class StackMesher {
         List<Coordinate[]> tris = new ArrayList<>();
         triangulate(up, true, tris);
         triangulate(down, false, tris);
-        return new Faces(tris, nodes);
+        // index the face vertices locally, so each is looked up once per height in the mesh's vertex table
+        VertexTable local = new VertexTable(ctx.scale(), Math.max(16, tris.size()));
+        int[] corners = new int[3 * tris.size()];
+        double scale = ctx.scale();
+        int k = 0;
+        for (Coordinate[] t : tris) {
+            for (Coordinate c : t) {
+                corners[k++] = local.index((long) Math.rint(c.x * scale), (long) Math.rint(c.y * scale), 0);
+            }
+        }
+        double[] xyz = local.coordinates();
+        long[] xy = new long[2 * local.size()];
+        for (int v = 0; v < local.size(); v++) {
+            xy[2 * v] = (long) Math.rint(xyz[3 * v] * scale);
+            xy[2 * v + 1] = (long) Math.rint(xyz[3 * v + 1] * scale);
+        }
+        return new Faces(xy, corners, nodes);
     }
 
     /**
@@ -295,6 +319,12 @@ final class StackMesher {
         int n = cs.length - 1;
         List<Coordinate> bottom = new ArrayList<>();
         List<Coordinate> top = new ArrayList<>();
+        // consecutive segments share their end vertices: carried over instead of looked up again
+        Coordinate first = reverse ? cs[n] : cs[0];
+        int firstB = vertex(first, iz0);
+        int firstT = vertex(first, iz1);
+        lastB = firstB;
+        lastT = firstT;
         for (int k = 0; k < n; k++) {
             Coordinate p = reverse ? cs[n - k] : cs[k];
             Coordinate q = reverse ? cs[n - k - 1] : cs[k + 1];
@@ -303,21 +333,26 @@ final class StackMesher {
             bottomNodes.split(p, q, bottom);
             topNodes.split(p, q, top);
             wallSplits += bottom.size() + top.size() - 4;
-            zipper(p, q, bottom, top, iz0, iz1);
+            boolean closing = k == n - 1;
+            zipper(p, q, bottom, top, iz0, iz1, lastB, lastT, closing ? firstB : -1, closing ? firstT : -1);
         }
     }
 
+    /** The end vertices (bottom, top) of the last zipped segment. */
+    private int lastB;
+    private int lastT;
+
     /** Triangulates the strip between the bottom chain and the top chain of one wall segment p→q. */
     private void zipper(Coordinate p, Coordinate q, List<Coordinate> bottom, List<Coordinate> top, long iz0,
-            long iz1) {
+            long iz1, int b0, int t0, int bEnd, int tEnd) {
         double dx = q.x - p.x;
         double dy = q.y - p.y;
         int i = 0;
         int j = 0;
         int mb = bottom.size() - 1;
         int mt = top.size() - 1;
-        int b = vertex(bottom.get(0), iz0);
-        int t = vertex(top.get(0), iz1);
+        int b = b0;
+        int t = t0;
         while (i < mb || j < mt) {
             boolean advanceBottom;
             if (i == mb) {
@@ -328,15 +363,19 @@ final class StackMesher {
                 advanceBottom = param(bottom.get(i + 1), p, dx, dy) <= param(top.get(j + 1), p, dx, dy);
             }
             if (advanceBottom) {
-                int nb = vertex(bottom.get(++i), iz0);
+                ++i;
+                int nb = i == mb && bEnd >= 0 ? bEnd : vertex(bottom.get(i), iz0);
                 triangles.add(b, nb, t);
                 b = nb;
             } else {
-                int nt = vertex(top.get(++j), iz1);
+                ++j;
+                int nt = j == mt && tEnd >= 0 ? tEnd : vertex(top.get(j), iz1);
                 triangles.add(b, nt, t);
                 t = nt;
             }
         }
+        lastB = b;
+        lastT = t;
     }
 
     private static double param(Coordinate c, Coordinate p, double dx, double dy) {
