@@ -29,6 +29,9 @@ import picocli.CommandLine.Parameters;
                 "Exit codes: 0 ok, 2 bad input (nothing written), 3 written but a check FAILED, 1 internal error."})
 public final class DesignCommand implements Callable<Integer> {
 
+    /** Failing checks listed on the terminal before pointing to the report. */
+    static final int MAX_FAILS_SHOWN = 8;
+
     @picocli.CommandLine.Spec
     CommandSpec command;
 
@@ -79,11 +82,25 @@ public final class DesignCommand implements Callable<Integer> {
         for (Headline.Figure f : Headline.figures(r)) {
             out.println(String.format(java.util.Locale.ROOT, "  %-44s %s %s", f.label(), f.text(), f.unit()));
         }
+        // each failing check once per part, with how often it failed there
+        java.util.Map<String, Integer> fails = new java.util.LinkedHashMap<>();
+        java.util.Map<String, String> remedies = new java.util.HashMap<>();
         for (Finding f : r.findings()) {
             if (f.severity() == Severity.FAIL) {
-                out.println("  FAIL " + f.code() + (f.part().isEmpty() ? "" : " (" + f.part() + ")")
-                        + (f.remedy().isEmpty() ? "" : ": " + f.remedy()));
+                String what = f.code() + (f.part().isEmpty() ? "" : " (" + f.part() + ")");
+                fails.merge(what, 1, Integer::sum);
+                remedies.putIfAbsent(what, f.remedy());
             }
+        }
+        int shown = 0;
+        for (var e : fails.entrySet()) {
+            if (shown++ == MAX_FAILS_SHOWN) {
+                out.println("  ... and " + (fails.size() - MAX_FAILS_SHOWN) + " more failing checks in the report");
+                break;
+            }
+            String remedy = remedies.get(e.getKey());
+            out.println("  FAIL " + e.getKey() + (e.getValue() > 1 ? " x" + e.getValue() : "")
+                    + (remedy.isEmpty() ? "" : ": " + remedy));
         }
         for (Omission o : r.omissions()) {
             out.println("  not computed (" + o.section() + "): " + o.reason());

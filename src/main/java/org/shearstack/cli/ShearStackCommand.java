@@ -22,6 +22,7 @@ import picocli.CommandLine.Model.CommandSpec;
             ViewCommand.class,
             SupplyCommand.class,
             CheckCommand.class,
+            FamilyCommand.class,
             // design, check, supply, family, dyno, view, calibrate, bench: add their classes here
             AutoComplete.GenerateCompletion.class,
         })

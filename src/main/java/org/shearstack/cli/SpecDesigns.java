@@ -17,6 +17,7 @@ import org.shearstack.physics.rotor.TurbineModel;
 import org.shearstack.profile.Profiles;
 import org.shearstack.rules.DesignResolver;
 import org.shearstack.rules.ProfileKeys;
+import org.shearstack.rules.sizing.DesignModels;
 import org.shearstack.spec.SpecReader;
 
 /**
@@ -25,7 +26,7 @@ import org.shearstack.spec.SpecReader;
  * performance model when the design resolves one.
  */
 final class SpecDesigns implements DesignLink.Source {
-    private static final double CHORD_TOLERANCE_MM = 0.02;
+    private static final double CHORD_TOLERANCE_MM = 0.05;
     private final Profiles profiles;
 
     SpecDesigns(Profiles profiles) {
@@ -54,9 +55,13 @@ final class SpecDesigns implements DesignLink.Source {
         return new DesignLink.Design(design.name(), inertia, source, model(design));
     }
 
-    /** The design's performance model; empty until the design resolves one. */
+    /** The design's performance model (nominal calibration); empty when the design lacks the sized keys. */
     private static Optional<TurbineModel> model(ResolvedDesign design) {
-        return Optional.empty();
+        try {
+            return Optional.of(DesignModels.turbineModel(design));
+        } catch (NoSuchElementException | IllegalArgumentException e) {
+            return Optional.empty();
+        }
     }
 
     private static Path specFile(Path path) {

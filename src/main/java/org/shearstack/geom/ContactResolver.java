@@ -12,6 +12,7 @@ import org.locationtech.jts.geom.GeometryFactory;
 import org.locationtech.jts.geom.LineString;
 import org.locationtech.jts.geom.Polygon;
 import org.locationtech.jts.operation.overlayng.OverlayNG;
+import org.locationtech.jts.operation.overlayng.UnaryUnionNG;
 
 /**
  * Finds and removes the two contacts that no meshing can make 2-manifold (kernel-notes P7, P8):
@@ -20,9 +21,9 @@ import org.locationtech.jts.operation.overlayng.OverlayNG;
  * <li>an opposite-side contact: a boundary edge of the slab below that the slab above has reversed (material
  * on opposite sides), so two bodies meet along an edge.</li>
  * </ul>
- * Each is opened by cutting away a square (pinch) or a strip (edge) one grid cell wide from the slab
- * (the upper one for an edge contact): a change below any printer's resolution that makes the solid a
- * proper 2-manifold.
+ * Each is opened by cutting away a square (pinch; one grid cell to each side, wider in later rounds) or a
+ * strip (edge; 1.5 grid cells to each side) from the slab (the upper one for an edge contact): a change far
+ * below any printer's resolution that makes the solid a proper 2-manifold.
  */
 final class ContactResolver {
 
@@ -33,11 +34,14 @@ final class ContactResolver {
     }
 
     /** Returns the regions with contacts opened, or the same list if none were found. */
-    static List<Geometry> open(GeometryContext ctx, List<Geometry> regions, double[] z0, double[] z1) {
+    static List<Geometry> open(GeometryContext ctx, List<Geometry> regions, double[] z0, double[] z1, int round) {
         List<Geometry> out = new ArrayList<>(regions);
         boolean changed = false;
         GeometryFactory f = ctx.factory();
         double g = ctx.gridMm();
+        // tangent curves stay within a grid cell of each other over a length of about sqrt(2 R grid), so a
+        // pinch found again in a later round is opened with a square four times as wide
+        double half = g * Math.pow(4, round);
         for (int s = 0; s < regions.size(); s++) {
             List<Geometry> cuts = new ArrayList<>();
             Set<Long> seen = new HashSet<>();
@@ -46,7 +50,7 @@ final class ContactResolver {
                 for (int i = 0; i + 1 < cs.length; i++) {
                     long key = key(ctx, cs[i]);
                     if (!seen.add(key) && pinched.add(key)) {
-                        cuts.add(square(f, cs[i], g));
+                        cuts.add(square(f, cs[i], half));
                     }
                 }
             });
@@ -66,8 +70,7 @@ final class ContactResolver {
                 });
             }
             if (!cuts.isEmpty()) {
-                Geometry cut = OverlayNG.overlay(f.buildGeometry(cuts), f.createPolygon(), OverlayNG.UNION,
-                        ctx.precisionModel());
+                Geometry cut = UnaryUnionNG.union(f.buildGeometry(cuts), ctx.precisionModel());
                 out.set(s, OverlayNG.overlay(regions.get(s), cut, OverlayNG.DIFFERENCE, ctx.precisionModel()));
                 changed = true;
             }

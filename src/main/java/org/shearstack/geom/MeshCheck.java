@@ -113,7 +113,57 @@ public final class MeshCheck {
             genus.add(closed && (fCount[s] % 2 == 0) && chi % 2 == 0 ? (int) ((2 - chi) / 2) : -1);
             volumes.add(vol[s]);
         }
-        return new MeshReport(nv, nt, open, duplicate, degenerate, nonFinite, unused, shells, genus, volumes, total / 6);
+        int pinched = closed ? pinchedVertices(tri, nv) : 0;
+        return new MeshReport(nv, nt, open, duplicate, degenerate, nonFinite, unused, pinched, shells, genus, volumes,
+                total / 6);
+    }
+
+    /** Vertices whose link (the edges opposite them) is more than one cycle; the mesh must be closed. */
+    private static int pinchedVertices(int[] tri, int nv) {
+        int[] start = new int[nv + 1];
+        for (int c : tri) {
+            start[c + 1]++;
+        }
+        for (int v = 0; v < nv; v++) {
+            start[v + 1] += start[v];
+        }
+        long[] link = new long[tri.length];
+        int[] fill = start.clone();
+        for (int t = 0; t < tri.length; t += 3) {
+            for (int k = 0; k < 3; k++) {
+                int v = tri[t + k];
+                long a = tri[t + (k + 1) % 3];
+                long b = tri[t + (k + 2) % 3];
+                link[fill[v]++] = (a << 32) | b;
+            }
+        }
+        int pinched = 0;
+        for (int v = 0; v < nv; v++) {
+            int from = start[v];
+            int to = start[v + 1];
+            if (to - from < 3) {
+                continue;
+            }
+            Arrays.sort(link, from, to);
+            // follow the link cycle from the first edge; a manifold vertex visits all its edges
+            long first = link[from];
+            int visited = 0;
+            long e = first;
+            do {
+                visited++;
+                long next = e & 0xffffffffL;
+                int i = Arrays.binarySearch(link, from, to, next << 32);
+                int idx = i >= 0 ? i : -i - 1;
+                if (idx >= to || (link[idx] >>> 32) != next) {
+                    break;
+                }
+                e = link[idx];
+            } while (e != first && visited <= to - from);
+            if (visited != to - from) {
+                pinched++;
+            }
+        }
+        return pinched;
     }
 
     /** Six times the signed volume of the tetrahedron (origin, a, b, c). */

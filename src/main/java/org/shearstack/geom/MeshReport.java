@@ -12,13 +12,16 @@ import java.util.List;
  * @param degenerateTriangles    triangles with a repeated vertex index or zero area
  * @param nonFiniteCoordinates   coordinates that are NaN or infinite
  * @param unusedVertices         vertices used by no triangle
+ * @param pinchedVertices        vertices whose triangles form more than one fan (two bodies touching at a
+ *                               point, kernel-notes P9): edge-manifold and printable as touching parts, so
+ *                               reported but not counted against {@link #isValidSolid()}
  * @param shellCount             edge-connected components
  * @param genusPerShell          genus of each shell from χ = V − E + F = 2 − 2g, or −1 where it is undefined
  * @param volumePerShellMm3      signed volume of each shell (negative for an inward-facing shell, e.g. a void)
  * @param signedVolumeMm3        signed volume of the whole mesh (positive when outward-oriented)
  */
 public record MeshReport(int vertexCount, int triangleCount, int openEdges, int duplicateEdges,
-        int degenerateTriangles, int nonFiniteCoordinates, int unusedVertices, int shellCount,
+        int degenerateTriangles, int nonFiniteCoordinates, int unusedVertices, int pinchedVertices, int shellCount,
         List<Integer> genusPerShell, List<Double> volumePerShellMm3, double signedVolumeMm3) {
 
     public MeshReport {
@@ -43,8 +46,8 @@ public record MeshReport(int vertexCount, int triangleCount, int openEdges, int 
     public String summary() {
         return String.format(java.util.Locale.ROOT,
                 "%d triangles, %d vertices, %d shells, genus %s, open edges %d, duplicate edges %d, "
-                        + "degenerate %d, non-finite %d, volume %.6f mm3",
+                        + "degenerate %d, non-finite %d, pinched vertices %d, volume %.6f mm3",
                 triangleCount, vertexCount, shellCount, genusPerShell, openEdges, duplicateEdges,
-                degenerateTriangles, nonFiniteCoordinates, signedVolumeMm3);
+                degenerateTriangles, nonFiniteCoordinates, pinchedVertices, signedVolumeMm3);
     }
 }

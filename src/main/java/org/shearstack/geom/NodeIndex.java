@@ -37,6 +37,11 @@ final class NodeIndex {
         }
     }
 
+    /** Builds the spatial index now (queries are then read-only). */
+    void build() {
+        tree.build();
+    }
+
     /**
      * Appends to {@code out} p, every node strictly between p and q whose hot pixel the segment crosses
      * (sorted along p→q), then q.

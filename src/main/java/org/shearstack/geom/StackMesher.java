@@ -95,31 +95,51 @@ final class StackMesher {
                 && a.equalsNorm(b);
     }
 
+    private record Interface(double z, Geometry below, Geometry above) {
+    }
+
+    /** One interface's faces (triangles as grid points, winding fixed) and its node index. */
+    private record Faces(long iz, List<Coordinate[]> triangles, NodeIndex nodes) {
+    }
+
     private void run(List<Band> bands) {
         int n = bands.size();
-        NodeIndex[] below = new NodeIndex[n];
-        NodeIndex[] above = new NodeIndex[n];
+        List<Interface> interfaces = new ArrayList<>();
+        int[] below = new int[n];
+        int[] above = new int[n];
         for (int i = 0; i < n; i++) {
             Band b = bands.get(i);
             if (i == 0 || bands.get(i - 1).z1 != b.z0) {
-                below[i] = face(b.z0, null, b.geometry);
+                below[i] = interfaces.size();
+                interfaces.add(new Interface(b.z0, null, b.geometry));
             }
             Band next = i + 1 < n ? bands.get(i + 1) : null;
+            above[i] = interfaces.size();
             if (next != null && next.z0 == b.z1) {
-                NodeIndex shared = face(b.z1, b.geometry, next.geometry);
-                above[i] = shared;
-                below[i + 1] = shared;
+                below[i + 1] = interfaces.size();
+                interfaces.add(new Interface(b.z1, b.geometry, next.geometry));
             } else {
-                above[i] = face(b.z1, b.geometry, null);
+                interfaces.add(new Interface(b.z1, b.geometry, null));
+            }
+        }
+        // interfaces are independent: compute them in parallel, then emit in order, so the output (vertex
+        // and triangle order) is the same as a sequential run
+        List<Faces> faces = java.util.stream.IntStream.range(0, interfaces.size()).parallel()
+                .mapToObj(k -> faces(interfaces.get(k))).toList();
+        for (Faces f : faces) {
+            for (Coordinate[] t : f.triangles) {
+                triangles.add(vertex(t[0], f.iz), vertex(t[1], f.iz), vertex(t[2], f.iz));
             }
         }
         for (int i = 0; i < n; i++) {
-            walls(bands.get(i), below[i], above[i]);
+            walls(bands.get(i), faces.get(below[i]).nodes, faces.get(above[i]).nodes);
         }
     }
 
-    /** Builds the up and down faces at height z and returns the interface's node index. */
-    private NodeIndex face(double z, Geometry a, Geometry b) {
+    /** The up and down faces at one interface, and its node index. */
+    private Faces faces(Interface in) {
+        Geometry a = in.below;
+        Geometry b = in.above;
         Geometry up;
         Geometry down;
         if (a == null) {
@@ -139,10 +159,11 @@ final class StackMesher {
             nodes.addAll(up);
             nodes.addAll(down);
         }
-        long iz = ctx.gridIndex(z);
-        triangulate(up, iz, true);
-        triangulate(down, iz, false);
-        return nodes;
+        nodes.build();
+        List<Coordinate[]> tris = new ArrayList<>();
+        triangulate(up, true, tris);
+        triangulate(down, false, tris);
+        return new Faces(ctx.gridIndex(in.z), tris, nodes);
     }
 
     /**
@@ -174,7 +195,8 @@ final class StackMesher {
         return true;
     }
 
-    private void triangulate(Geometry faces, long iz, boolean up) {
+    /** Triangles of each face polygon from its boundary vertices, wound CCW seen from above if up, else CW. */
+    private static void triangulate(Geometry faces, boolean up, List<Coordinate[]> out) {
         if (faces == null || faces.isEmpty()) {
             return;
         }
@@ -188,14 +210,7 @@ final class StackMesher {
                 Coordinate p1 = t.getCoordinate(1);
                 Coordinate p2 = t.getCoordinate(2);
                 double cross = (p1.x - p0.x) * (p2.y - p0.y) - (p1.y - p0.y) * (p2.x - p0.x);
-                int i0 = vertex(p0, iz);
-                int i1 = vertex(p1, iz);
-                int i2 = vertex(p2, iz);
-                if ((cross > 0) == up) {
-                    triangles.add(i0, i1, i2);
-                } else {
-                    triangles.add(i0, i2, i1);
-                }
+                out.add((cross > 0) == up ? new Coordinate[] {p0, p1, p2} : new Coordinate[] {p0, p2, p1});
             }
         }
     }

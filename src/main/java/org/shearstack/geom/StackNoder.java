@@ -49,7 +49,7 @@ final class StackNoder {
         }
         for (int round = 0; round < MAX_ROUNDS; round++) {
             NodeResult r = nodeOnce(ctx, regions);
-            List<Geometry> opened = ContactResolver.open(ctx, r.regions, z0, z1);
+            List<Geometry> opened = ContactResolver.open(ctx, r.regions, z0, z1, round);
             regions = opened;
             if (!r.repaired && opened == r.regions) {
                 break;

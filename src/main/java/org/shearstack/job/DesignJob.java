@@ -5,7 +5,6 @@ import java.util.List;
 import java.util.Optional;
 import org.shearstack.assembly.Kit;
 import org.shearstack.check.Finding;
-import org.shearstack.check.safety.BurstCheck;
 import org.shearstack.check.safety.SafetySummary;
 import org.shearstack.design.ResolvedDesign;
 import org.shearstack.geom.GeometryContext;
@@ -60,15 +59,13 @@ public final class DesignJob {
         Optional<PerformanceData> performance = setup.model()
                 .map(m -> PerformanceStage.run(m, design, options.mapPoints()));
 
-        double operating = performance.map(p -> p.operatingPoint().speedRadPerS()).orElse(Double.NaN);
-        List<String> missing = new ArrayList<>();
-        Optional<BurstCheck.Result> burst = SafetyStage.run(design, setup.model(), operating, missing);
-        if (burst.isEmpty()) {
-            omissions.add(new Omission("safety", "the burst check could not run: the design has no value for "
-                    + String.join(", ", missing) + "."));
+        ChecksStage.Checks checks = ChecksStage.run(design, setup.model(), performance);
+        findings.addAll(checks.findings());
+        Optional<SafetySummary> safety = checks.safety();
+        if (safety.isEmpty()) {
+            omissions.add(new Omission("safety", "the burst check could not run: the design lacks the rotor or"
+                    + " filament values it needs (see the BURST-RUNAWAY finding)."));
         }
-        burst.ifPresent(b -> findings.addAll(b.findings()));
-        Optional<SafetySummary> safety = burst.map(BurstCheck.Result::summary);
 
         Optional<Kit> kit = Optional.empty();
         Preview preview;
@@ -85,6 +82,7 @@ public final class DesignJob {
             Kit k = Kit.build(design, geometryContext(design));
             kit = Optional.of(k);
             findings.addAll(k.findings());
+            findings.addAll(ChecksStage.printability(design, k));
             preview = PreviewStage.render(k, options.preview());
         }
         List<PartData> parts = kit.map(k -> KitStage.parts(k, design)).orElse(List.of());

@@ -70,7 +70,7 @@ final class KitStage {
                 design.key(kd[0]).ifPresent(key -> dims.add(dimension(design, key, kd[1])));
             }
             out.add(new PartData(p.name(), p.count(), material, mass, p.solid().volumeMm3(),
-                    "as in parts/" + p.name() + ".stl: the file's Z axis is the print direction, lowest face on the bed",
+                    "as in parts/" + p.name() + ".stl (Z up, lowest face on the bed)",
                     p.solid(), dims));
         }
         return List.copyOf(out);

@@ -47,10 +47,11 @@ final class ViewerWindow {
     private final Label banner = new Label();
     private final Label status = new Label();
     private final Label details = new Label();
+    private final Label emptyNote = new Label();
     private final FlowPane headlines = new FlowPane(8, 6);
     private final VBox partRows = new VBox(4);
     private final ListView<Finding> findings = new ListView<>();
-    private final Slider spread = new Slider(0, 1, 0);
+    private final Slider spread = new Slider(0, ModelView.MAX_SPREAD, 0);
     private final CheckBox cut = new CheckBox("Cut through axis");
     private final Map<String, Boolean> visibility = new HashMap<>();
     private final Map<String, Rgb> colours = new HashMap<>();
@@ -64,7 +65,11 @@ final class ViewerWindow {
         area.setFill(PartNode.fx(Snapshots.BACKGROUND));
         area.widthProperty().bind(viewport.widthProperty());
         area.heightProperty().bind(viewport.heightProperty());
-        viewport.getChildren().add(area);
+        emptyNote.setWrapText(true);
+        emptyNote.setStyle("-fx-text-fill: #5a564d; -fx-font-size: 14px; -fx-padding: 24;");
+        emptyNote.maxWidthProperty().bind(viewport.widthProperty());
+        emptyNote.setMouseTransparent(true);
+        viewport.getChildren().addAll(area, emptyNote);
         viewport.setMinSize(200, 150);
         Navigation.attach(area, this, () -> Math.max(1, area.getHeight()));
         viewport.widthProperty().addListener((o, a, b) -> refitIfUntouched());
@@ -213,6 +218,8 @@ final class ViewerWindow {
             fitToView();
             fitted = true;
         }
+        emptyNote.setVisible(s.parts().isEmpty());
+        emptyNote.setText(s.parts().isEmpty() ? "Nothing to draw. " + String.join(" ", s.notes()) : "");
         List<String> all = new java.util.ArrayList<>(s.notes());
         all.addAll(next.notes());
         all.addAll(sectionNotes);

@@ -42,4 +42,56 @@ class LayeredSolidTest {
         assertEquals(2, r.shellCount());
         assertEquals(solid.noded().volumeMm3(), r.signedVolumeMm3(), solid.volumeMm3() * 1e-12);
     }
+
+    @Test
+    void partsTouchingAtAPointAreOpenedIntoAValidSolid() {
+        // kernel-notes P7: two discs meeting at the quadrant point (5, 0) pinch the solid there
+        Region pair = Region.disc(ctx, 0, 0, 10).union(Region.disc(ctx, 10, 0, 10));
+        Mesh mesh = LayeredSolid.extrusion(pair, 0, 1).toMesh(ctx);
+        MeshReport r = MeshCheck.validate(mesh);
+        assertTrue(r.isValidSolid(), r.summary());
+        // the opening removes a few µm² near the touch point (tangent circles stay within a grid cell over
+        // ~sqrt(2 R grid) = 0.07 mm), far below what a printer resolves
+        assertEquals(pair.areaMm2(), r.signedVolumeMm3(), 1e-3, "only a tiny square is cut");
+        assertTrue(r.signedVolumeMm3() < pair.areaMm2(), "material is removed, not added");
+    }
+
+    @Test
+    void aHoleAboveEqualToTheOutlineBelowIsOpenedIntoAValidSolid() {
+        // kernel-notes P8: the upper plate's hole coincides with the lower disc's outline (material on
+        // opposite sides), so the two bodies would share every edge of that curve
+        Region disc = Region.disc(ctx, 0, 0, 20);
+        Region plate = Region.centredRectangle(ctx, 0, 0, 40, 40).minus(disc);
+        LayeredSolid solid = LayeredSolid.builder(ctx).slab(0, 1, disc).slab(1, 2, plate).build();
+        MeshReport r = MeshCheck.validate(solid.toMesh(ctx));
+        assertTrue(r.isValidSolid(), r.summary());
+        assertEquals(2, r.shellCount(), "a one-grid gap now separates the bodies");
+        assertEquals(solid.volumeMm3(), r.signedVolumeMm3(), disc.perimeterMm() * 3 * ctx.gridMm());
+    }
+
+    @Test
+    void equalNeighboursMergeAndGapsMakeShells() {
+        Region r = Region.annulus(ctx, 0, 0, 12, 4);
+        LayeredSolid s = LayeredSolid.builder(ctx).slab(0, 1, r).slab(1, 2, r).slab(3, 4, r).build();
+        Mesh mesh = s.toMesh(ctx);
+        MeshReport rep = MeshCheck.validate(mesh);
+        assertEquals(2, rep.shellCount());
+        assertEquals(List.of(1, 1), rep.genusPerShell());
+        assertEquals(3 * r.areaMm2(), rep.signedVolumeMm3(), 1e-9 * rep.signedVolumeMm3());
+        assertEquals(2 * MeshCheck.validate(LayeredSolid.extrusion(r, 0, 1).toMesh(ctx)).triangleCount(),
+                mesh.triangleCount(), "merged slabs add no triangles");
+        assertTrue(s.slabAt(1.5).isPresent());
+        assertTrue(s.slabAt(2.5).isEmpty());
+    }
+
+    @Test
+    void aPointTouchAcrossAnInterfaceIsReportedAsAPinchedVertex() {
+        // kernel-notes P9: a lower square's corner touches the upper square's corner at one point
+        Region low = Region.rectangle(ctx, 0, 0, 5, 5);
+        Region high = Region.rectangle(ctx, 5, 5, 10, 10);
+        MeshReport r = MeshCheck.validate(LayeredSolid.builder(ctx).slab(0, 1, low).slab(1, 2, high).build().toMesh(ctx));
+        assertTrue(r.isValidSolid(), r.summary());
+        assertEquals(1, r.pinchedVertices(), r.summary());
+        assertEquals(0, MeshCheck.validate(LayeredSolid.extrusion(low, 0, 1).toMesh(ctx)).pinchedVertices());
+    }
 }

@@ -49,7 +49,7 @@ class DesignCommandTest {
     @Test
     void aFailingCheckStillWritesTheReportAndExitsWithThree() throws IOException {
         Path out = tmp.resolve("pinned");
-        Run r = run("design", "src/test/resources/report/pinned-demo.yaml", "-o", out.toString(), "--no-preview");
+        Run r = run("design", "src/test/resources/report/pinned-demo.yaml", "-o", out.toString(), "--check-only");
         assertEquals(3, r.code(), r.out() + r.err());
         JsonNode json = new ObjectMapper().readTree(out.resolve("report.json").toFile());
         assertEquals("fail", json.get("verdict").asText());

@@ -4,16 +4,13 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Path;
-import java.util.List;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.shearstack.assembly.Kit;
 import org.shearstack.assembly.KitPart;
-import org.shearstack.geom.GeometryContext;
 import org.shearstack.geom.Mesh;
 import org.shearstack.io.kit.KitWriter;
-import org.shearstack.rules.geometry.TestDesigns;
 
 /** The kit adapter and the kit-folder reader give the same scene; sections come from the layered solids. */
 class KitScenesTest {
@@ -23,8 +20,8 @@ class KitScenesTest {
 
     @BeforeAll
     static void build() {
-        kit = Kit.build("demo", TestDesigns.demo(), GeometryContext.withChordTolerance(0.05));
-        scene = KitScenes.from(kit, List.of(), List.of());
+        kit = DemoKits.kit();
+        scene = DemoKits.scene();
     }
 
     @Test
@@ -42,8 +39,8 @@ class KitScenesTest {
     }
 
     @Test
-    void sectionOfEveryPrintedPartIsClosedAndAtMostTheWhole() {
-        for (ViewPart p : scene.parts()) {
+    void sectionOfEveryDistinctPartIsClosedAndAtMostTheWhole() {
+        for (ViewPart p : scene.parts().stream().filter(p -> !p.name().contains(" #") || p.name().endsWith(" #1")).toList()) {
             Mesh half = p.section().orElseThrow().keptHalf();
             if (half.triangleCount() == 0) {
                 continue;

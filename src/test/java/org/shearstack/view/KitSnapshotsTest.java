@@ -6,14 +6,10 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.LinkedHashSet;
-import java.util.List;
 import java.util.Set;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
-import org.shearstack.assembly.Kit;
-import org.shearstack.geom.GeometryContext;
-import org.shearstack.rules.geometry.TestDesigns;
 
 /** Pictures of the parts helper's demo kit: every saturated family colour shows, spread is wider, the cut opens it. */
 @Tag("display")
@@ -26,12 +22,11 @@ class KitSnapshotsTest {
 
     @Test
     void demoKitPictures() throws Exception {
-        Kit kit = Kit.build("demo", TestDesigns.demo(), GeometryContext.withChordTolerance(0.05));
-        ViewScene scene = KitScenes.from(kit, List.of(), List.of());
-        ImagePixels assembled = Snapshots.renderPixels(scene, new SnapshotOptions(800, 500, false, false));
-        ImagePixels exploded = Snapshots.renderPixels(scene, new SnapshotOptions(800, 500, true, false));
-        ImagePixels cut = Snapshots.renderPixels(scene, new SnapshotOptions(800, 500, false, true));
-        ImagePixels both = Snapshots.renderPixels(scene, new SnapshotOptions(800, 500, true, true));
+        ViewScene scene = DemoKits.scene();
+        ImagePixels assembled = Snapshots.renderPixels(scene, new SnapshotOptions(640, 400, false, false));
+        ImagePixels exploded = Snapshots.renderPixels(scene, new SnapshotOptions(640, 400, true, false));
+        ImagePixels cut = Snapshots.renderPixels(scene, new SnapshotOptions(640, 400, false, true));
+        ImagePixels both = Snapshots.renderPixels(scene, new SnapshotOptions(640, 400, true, true));
         Path dir = Path.of("target", "snapshots");
         Files.createDirectories(dir);
         Files.write(dir.resolve("kit-assembled.png"), assembled.toPng());

@@ -26,6 +26,17 @@ class ViewBench {
         SpecSceneSource spec = SpecSceneSource.of(Path.of("examples", "classroom-demo.yaml"), Profiles.shipped(),
                 DesignScenes::withoutParts);
         report("spec read + resolve (classroom-demo)", () -> spec.load());
+        org.shearstack.part.DesignValues demo = org.shearstack.rules.geometry.TestDesigns.demo();
+        org.shearstack.geom.GeometryContext preview = org.shearstack.geom.GeometryContext.withChordTolerance(
+                DesignScenes.PREVIEW_CHORD_TOLERANCE_MM);
+        report("demo kit: build kit (parts helper's demo design)", () -> org.shearstack.assembly.Kit.build("demo", demo,
+                preview));
+        ViewScene kitScene = KitScenes.from(org.shearstack.assembly.Kit.build("demo", demo, preview), java.util.List.of(),
+                java.util.List.of());
+        report("demo kit: build nodes (" + kitScene.parts().size() + " parts, " + triangles(kitScene) + " triangles)",
+                () -> ModelView.build(kitScene));
+        report("demo kit: kit + nodes (the update after an edit, minus the spec)", () -> ModelView.build(KitScenes.from(
+                org.shearstack.assembly.Kit.build("demo", demo, preview), java.util.List.of(), java.util.List.of())));
         ViewScene sample = SampleAssembly.scene();
         report("sample: build nodes (5 parts, " + triangles(sample) + " triangles)", () -> ModelView.build(sample));
         ViewSession session = ViewSession.open(SceneSource.fixed(sample), sample, false, line -> { });

@@ -11,7 +11,8 @@ import org.shearstack.design.ResolvedDesign;
 /**
  * HOUSING-HOOP, COVER-PLATE, COVER-DEFLECTION, BOLT-LOAD on a resolved design at the full supply pressure.
  * The seal's effective diameter is the groove's outer edge (pressure reaches the O-ring's outside); the cover
- * spans the bolt circle; the anchor is taken as the anchor hole over its depth.
+ * spans the bolt circle; the anchor is taken as the anchor hole over its depth; the hoop section is the ring
+ * less the plenum channel and the anchor hole ({@link #hoopWall}).
  */
 public final class Containment implements Check {
 
@@ -35,12 +36,33 @@ public final class Containment implements Check {
         double endPlay = v.optional("housing.end-play");
         double factor = v.optional("targets.safety-factor");
         return new ContainmentInputs(v.need("supply.pressure"), v.need("supply.ambient"), chamber,
-                v.need("housing.wall"), v.need("cover.thickness"), boltCircle, seal,
+                hoopWall(v, chamber), v.need("cover.thickness"), boltCircle, seal,
                 (int) Math.round(v.need("housing.bolt-count")), Screws.diameterMm(size), Screws.pitchMm(size),
                 v.need("bolt.anchor-hole-diameter"), v.need("bolt.anchor-depth"), 0,
                 v.need("filament.elastic-modulus"), v.need("filament.poisson-ratio"),
                 v.need("filament.tensile-strength-xy"), v.optional("filament.tensile-strength-z"), endPlay,
                 Double.isNaN(factor) ? 3 : factor);
+    }
+
+    /**
+     * The radial section that carries the hoop load: from the outside diameter, the ring's material less the
+     * plenum channel and the anchor hole, which cut through it (at supply pressure the plenum's inner wall is
+     * loaded on both sides and carries nothing); {@code housing.wall} when the outside diameter is unknown.
+     */
+    static double hoopWall(DesignValues v, double chamber) {
+        double od = v.optional("housing.outside-diameter");
+        if (Double.isNaN(od)) {
+            return v.need("housing.wall");
+        }
+        double plenum = v.optional("housing.plenum-diameter");
+        double anchor = Math.max(zeroIfNaN(v.optional("bolt.anchor-hole-diameter")),
+                zeroIfNaN(v.optional("bolt.clearance-diameter")));
+        double wall = (od - chamber) / 2 - zeroIfNaN(plenum) - anchor;
+        return wall > 0 ? wall : v.need("housing.wall");
+    }
+
+    private static double zeroIfNaN(double x) {
+        return Double.isNaN(x) ? 0 : x;
     }
 
     @Override

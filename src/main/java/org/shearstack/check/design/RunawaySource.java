@@ -15,6 +15,21 @@ public interface RunawaySource {
     /** The model for the design; reads through {@code values} so missing keys are reported. */
     RunawayModel forDesign(DesignValues values);
 
+    /**
+     * The performance model's band ({@link TurbineRunaway} over the design's turbine model) when the design
+     * carries the flow inputs; otherwise the locked-flow bound.
+     */
+    static RunawaySource performanceModelOrBound() {
+        RunawaySource bound = lockedFlowBound();
+        return v -> {
+            try {
+                return new TurbineRunaway(org.shearstack.rules.sizing.DesignModels.turbineModel(v.design()));
+            } catch (java.util.NoSuchElementException | IllegalArgumentException | IllegalStateException e) {
+                return bound.forDesign(v);
+            }
+        };
+    }
+
     /** The locked-flow bound from the disc and exhaust diameters, supply temperature and ambient pressure. */
     static RunawaySource lockedFlowBound() {
         return v -> {

@@ -24,6 +24,12 @@ public final class PartPrintability {
     }
 
     public static List<Finding> run(ResolvedDesign design, GeometryContext ctx) {
+        return run(design, ctx, name -> true);
+    }
+
+    /** Only the parts whose names pass {@code parts} (for focused runs and tests). */
+    public static List<Finding> run(ResolvedDesign design, GeometryContext ctx,
+            java.util.function.Predicate<String> parts) {
         PrintLimits limits = PrintLimits.of(new DesignValues(design));
         Dims d;
         try {
@@ -36,6 +42,9 @@ public final class PartPrintability {
         }
         List<Finding> out = new ArrayList<>();
         for (PartDef p : Layout.parts(d)) {
+            if (!parts.test(p.name())) {
+                continue;
+            }
             LayeredSolid s = p.recipe().build(d, ctx);
             out.addAll(Printability.check(p.name(), s, limits));
         }

@@ -19,7 +19,8 @@ import org.shearstack.geom.Slab;
  * Printability of one part in its print orientation, on its layered representation (DESIGN.md §2):
  * <ul>
  *   <li>WALL-THIN (caution): material a disc of two line widths cannot reach (morphological opening);</li>
- *   <li>PRINT-FEATURE-SMALL (fail): the same, narrower than the nozzle;</li>
+ *   <li>PRINT-FEATURE-SMALL (fail): a whole connected feature narrower than the nozzle (a thin tip or edge of a
+ *       larger body is only a WALL-THIN caution: the slicer drops it, the part still prints);</li>
  *   <li>GAP-NARROW (caution): openings a disc of the printer's minimum gap closes (morphological closing);</li>
  *   <li>OVERHANG (caution): area of a slab beyond what the slab below carries (one layer's step at the
  *       overhang limit plus half a line width), touching its support on one side;</li>
@@ -82,8 +83,10 @@ public final class Printability {
         double w = l.minWallMm();
         Region r = s.region();
         Region thin = r.minus(r.offset(-w / 2).offset(w / 2));
+        Geometry body = thin.isEmpty() ? null : r.geometry();
         for (Piece p : pieces(thin, w)) {
-            if (p.width < l.nozzleMm()) {
+            boolean whole = wholeComponent(body, p);
+            if (whole && p.width < l.nozzleMm()) {
                 add(out, Findings.at("PRINT-FEATURE-SMALL", Severity.FAIL,
                         "A feature " + Findings.num(p.width, 2) + " mm wide is narrower than the "
                                 + Findings.num(l.nozzleMm(), 2) + " mm nozzle and will not print.",
@@ -91,15 +94,28 @@ public final class Printability {
                         "widen it to at least " + Findings.num(w, 2) + " mm (two line widths) or remove it",
                         p.x, p.y, s.z0Mm()));
             } else {
+                String below = p.width < l.nozzleMm() ? "; narrower than the nozzle, it will print thinner or not at all"
+                        : "";
                 add(out, Findings.at("WALL-THIN", Severity.CAUTION,
                         "A wall " + Findings.num(p.width, 2) + " mm thick is thinner than two line widths ("
-                                + Findings.num(w, 2) + " mm, common practice minimum).",
+                                + Findings.num(w, 2) + " mm, common practice minimum)" + below + ".",
                         p.width, w, "mm", p.width / w, part, "thin wall",
                         "thicken it to " + Findings.num(w, 2) + " mm or more (three lines, "
                                 + Findings.num(3 * l.lineWidthMm(), 2) + " mm, for load-bearing walls)",
                         p.x, p.y, s.z0Mm()));
             }
         }
+    }
+
+    /** True when the thin piece is (nearly) all of the connected part of the slab it lies in. */
+    private static boolean wholeComponent(Geometry body, Piece p) {
+        for (int i = 0; i < body.getNumGeometries(); i++) {
+            Geometry c = body.getGeometryN(i);
+            if (c.getEnvelopeInternal().intersects(p.geometry.getEnvelopeInternal()) && c.intersects(p.geometry)) {
+                return p.geometry.getArea() >= 0.95 * c.getArea();
+            }
+        }
+        return false;
     }
 
     private static void gaps(String part, Slab s, PrintLimits l, Map<String, List<Finding>> out) {
@@ -218,10 +234,10 @@ public final class Printability {
      * residues of an opening or closing are such strips), a little low for short stubs. Located at an interior
      * point.
      */
-    private record Piece(double width, double x, double y) {
+    private record Piece(double width, double x, double y, Geometry geometry) {
         static Piece of(Geometry piece) {
             Point c = piece.getInteriorPoint();
-            return new Piece(2 * piece.getArea() / piece.getLength(), c.getX(), c.getY());
+            return new Piece(2 * piece.getArea() / piece.getLength(), c.getX(), c.getY(), piece);
         }
     }
 }

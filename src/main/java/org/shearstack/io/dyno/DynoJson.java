@@ -45,6 +45,7 @@ public final class DynoJson {
             ObjectNode o = win.putObject(e.getKey().label());
             o.put("method", "Savitzky-Golay");
             o.put("points", e.getValue().points());
+            o.put("maxPoints", e.getValue().maxPoints());
             o.put("order", e.getValue().order());
             put(o, "durationS", e.getValue().durationS());
             o.put("reason", e.getValue().reason());

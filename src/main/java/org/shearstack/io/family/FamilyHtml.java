@@ -1,6 +1,5 @@
 package org.shearstack.io.family;
 
-import java.util.List;
 import java.util.Locale;
 
 /**
@@ -19,16 +18,15 @@ public final class FamilyHtml {
             table{border-collapse:collapse;font-size:.85em}th,td{border:1px solid #ccc;padding:3px 6px}
             th{background:#f0f0f0;vertical-align:bottom}td.n{text-align:right;font-variant-numeric:tabular-nums}
             tr.fail td,tr.bad-input td,tr.error td{background:#fde8e8}tr.caution td.status{background:#fff4e6}
-            tr.not-run td{color:#888}td.status{font-weight:bold}
+            tr.not-run td{color:#888}td.status{font-weight:bold}td.why{min-width:22em;font-size:.92em}
             .charts{display:flex;flex-wrap:wrap;gap:1em}
             svg.chart{border:1px solid #ddd;background:#fff}
             svg .title{font-size:13px;font-weight:bold}svg .tick{font-size:10px;fill:#333}svg .axis{font-size:11px}
             svg .frame{fill:none;stroke:#888}svg .grid{stroke:#eee}svg .ref{stroke:#c00;stroke-dasharray:5 3}
-            svg .ref-label{fill:#c00}svg .line{fill:none;stroke-width:1.5}svg .missing{fill:#c00;font-size:14px}
-            svg .pt.fail{fill:#d00;stroke:#600}
-            svg .s0{stroke:#1f77b4;fill:#1f77b4}svg .s1{stroke:#ff7f0e;fill:#ff7f0e}svg .s2{stroke:#2ca02c;fill:#2ca02c}
+            svg .ref-label{fill:#c00}svg polyline.line{fill:none;stroke-width:1.5}svg .missing{fill:#c00;font-size:14px}
+                        svg .s0{stroke:#1f77b4;fill:#1f77b4}svg .s1{stroke:#ff7f0e;fill:#ff7f0e}svg .s2{stroke:#2ca02c;fill:#2ca02c}
             svg .s3{stroke:#9467bd;fill:#9467bd}svg .s4{stroke:#8c564b;fill:#8c564b}svg .s5{stroke:#e377c2;fill:#e377c2}
-            svg .s6{stroke:#7f7f7f;fill:#7f7f7f}svg .s7{stroke:#17becf;fill:#17becf}svg circle.pt{stroke-width:1}
+            svg .s6{stroke:#7f7f7f;fill:#7f7f7f}svg .s7{stroke:#17becf;fill:#17becf}svg circle.pt{stroke-width:1}svg circle.pt.fail{stroke:#d00;stroke-width:2.5}
             """;
 
     private FamilyHtml() {
@@ -65,7 +63,7 @@ public final class FamilyHtml {
         for (FamilyChart.Spec c : FamilyPlots.of(t)) {
             b.append(FamilyChart.svg(c));
         }
-        b.append("</div>\n<p>Red points: variants whose checks failed. A red cross on the axis: a variant without"
+        b.append("</div>\n<p>Points ringed in red: variants whose checks failed. A red cross on the axis: a variant without"
                 + " that value (bad input, error, not run or not computed).</p>\n");
         b.append("<h2>Comparison</h2>\n");
         table(b, t);
@@ -109,13 +107,13 @@ public final class FamilyHtml {
             for (VariedValue v : r.values()) {
                 b.append("<td>").append(Html.esc(v.written())).append("</td>");
             }
-            b.append("<td class=\"status\">").append(r.status().word()).append("</td><td>")
+            b.append("<td class=\"status\">").append(r.status().word()).append("</td><td class=\"why\">")
                     .append(Html.esc(r.firstFailure())).append("</td>");
             double[] dims = r.dimensions();
             for (int i = 0; i < dims.length; i++) {
                 boolean text = FamilyColumns.DIMENSIONS.get(i).text();
                 b.append(text ? "<td>" : "<td class=\"n\">")
-                        .append(Html.esc(text ? r.dimensionTexts().get(i) : sig(dims[i], 4))).append("</td>");
+                        .append(Html.esc(text ? r.dimensionTexts().get(i) : trim(sig(dims[i], 4)))).append("</td>");
             }
             double[] figs = r.figures();
             for (int i = 0; i < figs.length; i++) {
@@ -153,6 +151,11 @@ public final class FamilyHtml {
         return fixed(shown, digits);
     }
 
+    /** "60.00" → "60", "0.8000" → "0.8". */
+    static String trim(String s) {
+        return s.contains(".") ? s.replaceAll("0+$", "").replaceAll("\\.$", "") : s;
+    }
+
     static String sig(double v, int digits) {
         if (!Double.isFinite(v)) {
             return "-";
@@ -167,16 +170,5 @@ public final class FamilyHtml {
     private static String fixed(double v, int decimals) {
         String s = String.format(Locale.ROOT, "%." + decimals + "f", v);
         return s.matches("-0(\\.0*)?") ? s.substring(1) : s;
-    }
-
-    /** The table's cells as shown (tests read them back). */
-    static List<String> shownFigures(FamilyRow r) {
-        double[] figs = r.figures();
-        java.util.ArrayList<String> out = new java.util.ArrayList<>();
-        for (int i = 0; i < figs.length; i++) {
-            FamilyColumns.Figure f = FamilyColumns.FIGURES.get(i);
-            out.add(format(figs[i], f.digits(), f.roundDown()));
-        }
-        return out;
     }
 }

@@ -74,7 +74,7 @@ public final class ThreeMfWriter {
     /** As {@link #write(ThreeMfModel, OutputStream)}, sharing formatted meshes through {@code texts}. */
     public static void write(ThreeMfModel model, OutputStream out, MeshTexts texts) throws IOException {
         ZipOutputStream zip = new ZipOutputStream(new NonClosing(out), StandardCharsets.UTF_8);
-        zip.setLevel(Deflater.DEFAULT_COMPRESSION);
+        zip.setLevel(Deflater.BEST_SPEED); // fixed level: same bytes on every run
         boolean thumb = model.thumbnailPng() != null;
         entry(zip, "[Content_Types].xml");
         text(zip, contentTypes(thumb));

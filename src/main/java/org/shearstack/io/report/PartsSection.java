@@ -15,7 +15,7 @@ final class PartsSection {
             b.append("<figure class=\"preview\"><img alt=\"assembly of ").append(Xml.esc(r.design().name()))
                     .append("\" src=\"data:image/png;base64,")
                     .append(Base64.getEncoder().encodeToString(r.preview().png().get()))
-                    .append("\"/><figcaption>The assembly as generated.</figcaption></figure>\n");
+                    .append("\"/><figcaption>The assembly as generated, cut through the axis.</figcaption></figure>\n");
         } else {
             b.append("<p class=\"note\">No assembly picture was rendered: ").append(Xml.esc(r.preview().note()))
                     .append("</p>\n");

@@ -63,6 +63,7 @@ final class ReportStyle {
             svg .cutline { stroke: var(--fail); stroke-dasharray: 8 3 2 3; }
             svg .dimline { stroke: var(--ink); stroke-width: 0.8; } svg .dim { font-size: 11px; }
             svg .dlabel { fill: var(--muted); font-size: 11px; }
+            table.facts { max-width: 440px; }
             table.facts th { text-align: left; color: var(--muted); font-weight: normal; padding: 2px 14px 2px 0; }
             details { border-bottom: 1px dotted var(--rule); padding: 2px 0; }
             details summary { cursor: pointer; } details dl { margin: 4px 0 8px 20px; }
@@ -74,6 +75,7 @@ final class ReportStyle {
             table.findings th, table.bom th { text-align: left; background: #ece8de; padding: 5px 8px; }
             table.findings td, table.bom td { border-top: 1px solid var(--rule); padding: 5px 8px; vertical-align: top; }
             td.n { text-align: right; white-space: nowrap; }
+            table.findings td code { white-space: nowrap; }
             .sev { display: inline-block; min-width: 62px; text-align: center; color: #fff; border-radius: 4px;
               padding: 1px 6px; font-weight: bold; text-transform: uppercase; font-size: 11px; }
             .sev.s-ok { background: var(--pass); } .sev.s-caution { background: var(--caution); }

@@ -19,8 +19,8 @@ import org.shearstack.geom.Slab;
  */
 public final class SectionDrawing {
 
-    static final double PLAN_PX = 170;
-    static final double SECTION_WIDTH_PX = 300;
+    static final double PLAN_PX = 150;
+    static final double SECTION_WIDTH_PX = 270;
     static final double MIN_SECTION_HEIGHT_PX = 36;
     static final double MAX_SECTION_HEIGHT_PX = 200;
     static final double PAD = 22;
@@ -32,8 +32,18 @@ public final class SectionDrawing {
     public record Cell(double x0Mm, double x1Mm, double z0Mm, double z1Mm) {
     }
 
-    /** The section through the axis: for each slab, the x intervals of its region on the line y = 0. */
+    /**
+     * Where the section is cut: through the axis (y = 0) when the part spans it, else through the middle of its
+     * footprint (parts that do not sit on the axis, such as a nozzle block).
+     */
+    public static double cutYMm(LayeredSolid solid) {
+        Bounds2 b = bounds(solid);
+        return b.minYMm() <= 0 && b.maxYMm() >= 0 ? 0 : (b.minYMm() + b.maxYMm()) / 2;
+    }
+
+    /** The section: for each slab, the x intervals of its region on the line y = {@link #cutYMm}. */
     public static List<Cell> section(LayeredSolid solid) {
+        double cutY = cutYMm(solid);
         List<Cell> cells = new ArrayList<>();
         for (Slab slab : solid.slabs()) {
             Region r = slab.region();
@@ -43,7 +53,7 @@ public final class SectionDrawing {
             Bounds2 b = r.bounds();
             Geometry g = r.geometry();
             LineString cut = g.getFactory().createLineString(new Coordinate[] {
-                new Coordinate(b.minXMm() - 1, 0), new Coordinate(b.maxXMm() + 1, 0)});
+                new Coordinate(b.minXMm() - 1, cutY), new Coordinate(b.maxXMm() + 1, cutY)});
             Geometry inter = g.intersection(cut);
             for (int i = 0; i < inter.getNumGeometries(); i++) {
                 Geometry part = inter.getGeometryN(i);
@@ -103,7 +113,8 @@ public final class SectionDrawing {
             b.append("Z ");
         }
         b.append("\"/>\n");
-        double cutY = planY0 + all.maxYMm() * planScale;
+        double cutYMm = cutYMm(solid);
+        double cutY = planY0 + (all.maxYMm() - cutYMm) * planScale;
         b.append("<line class=\"cutline\" x1=\"").append(px(planX0 - 6)).append("\" y1=\"").append(px(cutY))
                 .append("\" x2=\"").append(px(planX0 + all.widthMm() * planScale + 6)).append("\" y2=\"")
                 .append(px(cutY)).append("\"/>\n");
@@ -111,7 +122,7 @@ public final class SectionDrawing {
         double secX0 = PAD + PLAN_PX + 2 * PAD;
         double secBottom = planY0 + secH;
         b.append("<text class=\"dlabel\" x=\"").append(px(secX0)).append("\" y=\"").append(px(PAD))
-                .append("\">section A-A (y = 0)").append(exaggeration > 1
+                .append("\">section A-A (y = ").append(Num.fixed(cutYMm, 1)).append(" mm)").append(exaggeration > 1
                         ? ", height drawn " + Num.fixed(exaggeration, 0) + "x" : "").append("</text>\n");
         for (Cell c : section(solid)) {
             double x = secX0 + (c.x0Mm() - all.minXMm()) * sx;

@@ -105,16 +105,20 @@ public final class SvgPlot {
             points(b, s.x(), s.y(), false);
             b.append("\"/>\n");
         }
-        for (Mark m : marks) {
+        for (int i = 0; i < marks.size(); i++) {
+            Mark m = marks.get(i);
             double cx = xPx(m.x());
             double cy = yPx(m.y());
+            // later marks put their label below the point when there is room, so neighbouring labels do not collide
+            boolean below = i % 2 == 1 && cy + 18 < HEIGHT - BOTTOM;
+            double ty = below ? cy + 16 : Math.max(cy - 7, TOP + 12);
             b.append("<g class=\"mark\" data-name=\"").append(Xml.esc(m.name())).append("\" data-x=\"")
                     .append(Num.sig(m.x(), 6)).append("\" data-y=\"").append(Num.sig(m.y(), 6)).append("\">")
                     .append("<line class=\"markline\" x1=\"").append(px(cx)).append("\" y1=\"").append(px(cy))
                     .append("\" x2=\"").append(px(cx)).append("\" y2=\"").append(HEIGHT - BOTTOM).append("\"/>")
                     .append("<circle cx=\"").append(px(cx)).append("\" cy=\"").append(px(cy)).append("\" r=\"4.5\"/>")
                     .append("<text x=\"").append(px(Math.min(cx + 7, WIDTH - RIGHT - 4))).append("\" y=\"")
-                    .append(px(Math.max(cy - 7, TOP + 12))).append("\"")
+                    .append(px(ty)).append("\"")
                     .append(cx > WIDTH * 0.7 ? " text-anchor=\"end\"" : "").append('>')
                     .append(Xml.esc(m.name())).append("</text></g>\n");
         }

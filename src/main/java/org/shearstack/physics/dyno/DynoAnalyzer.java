@@ -151,7 +151,7 @@ public final class DynoAnalyzer {
     }
 
     /** Smoothed speed and slope of one segment. */
-    record Fitted(double[] t, double[] w, double[] a, WindowChoice window) {
+    record Fitted(double[] t, double[] w, double[] a, WindowChoice window, int[] perSample) {
     }
 
     private static Fitted smooth(SpeedLog log, Segment s, DynoInputs in, Map<Segment.Kind, WindowChoice> windows) {
@@ -164,9 +164,17 @@ public final class DynoAnalyzer {
             throw new IllegalArgumentException("the " + s.kind().label() + " has " + t.length
                     + " samples, fewer than the window of " + wc.points());
         }
-        windows.put(s.kind(), wc);
         SavitzkyGolay.Smoothed sm = SavitzkyGolay.apply(t, w, wc.points(), wc.order());
-        return new Fitted(t, sm.value(), sm.perSecond(), wc);
+        int[] perSample = new int[t.length];
+        java.util.Arrays.fill(perSample, wc.points());
+        if (in.windowPoints().isEmpty()) {
+            WindowChoice.Local local = WindowChoice.local(wc, t, w, sm.perSecond(), s.kind().label());
+            wc = local.choice();
+            perSample = local.windows();
+            sm = SavitzkyGolay.apply(t, w, perSample, wc.order());
+        }
+        windows.put(s.kind(), wc);
+        return new Fitted(t, sm.value(), sm.perSecond(), wc, perSample);
     }
 
     static Finding finding(String code, Severity sev, String message, String remedy) {

@@ -46,6 +46,6 @@ final class GeneratorTerms {
             return null;
         }
         double[] part = Arrays.copyOfRange(column.get(), s.from(), s.to());
-        return SavitzkyGolay.apply(f.t(), part, f.window().points(), f.window().order()).value();
+        return SavitzkyGolay.apply(f.t(), part, f.perSample(), f.window().order()).value();
     }
 }

@@ -108,7 +108,24 @@ public final class SavitzkyGolay {
      * shifted inwards (never shrunk), so every value comes from a full fit.
      */
     public static Smoothed apply(double[] timeS, double[] y, int window, int order) {
+        int[] w = new int[y.length];
+        java.util.Arrays.fill(w, window);
+        return apply(timeS, y, w, order);
+    }
+
+    /**
+     * As {@link #apply(double[], double[], int, int)} with a window of its own for each sample (odd, at least
+     * order + 1, at most the number of samples).
+     */
+    public static Smoothed apply(double[] timeS, double[] y, int[] windows, int order) {
         int n = y.length;
+        if (windows.length != n) {
+            throw new IllegalArgumentException("one window per sample is needed: " + windows.length + " for " + n);
+        }
+        int window = 0;
+        for (int v : windows) {
+            window = Math.max(window, v);
+        }
         if (timeS.length != n) {
             throw new IllegalArgumentException("time and value arrays differ in length: " + timeS.length + " vs " + n);
         }
@@ -120,11 +137,12 @@ public final class SavitzkyGolay {
         }
         double[] value = new double[n];
         double[] slope = new double[n];
-        int half = window / 2;
-        double[] offsets = new double[window];
         for (int i = 0; i < n; i++) {
-            int start = Math.min(Math.max(0, i - half), n - window);
-            for (int j = 0; j < window; j++) {
+            int win = windows[i];
+            int half = win / 2;
+            double[] offsets = new double[win];
+            int start = Math.min(Math.max(0, i - half), n - win);
+            for (int j = 0; j < win; j++) {
                 offsets[j] = timeS[start + j] - timeS[i];
             }
             double[][] w = weightsUpTo(offsets, order, 1);
@@ -132,7 +150,7 @@ public final class SavitzkyGolay {
             double[] w1 = w[1];
             double v = 0;
             double d = 0;
-            for (int j = 0; j < window; j++) {
+            for (int j = 0; j < win; j++) {
                 v += w0[j] * y[start + j];
                 d += w1[j] * y[start + j];
             }

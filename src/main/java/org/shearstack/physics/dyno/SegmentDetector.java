@@ -5,7 +5,7 @@ import java.util.Optional;
 /**
  * Finds the run-up (air on), the steady stretch near top speed and the coast-down (air off) in a log
  * of one run: the top is the stretch within 2 % of the highest smoothed speed; the run-up is the rise
- * from the last sample below 5 % of it (or from the log's start) to the top; the coast-down is the fall
+ * from the last sample below 0.5 % of it (or from the log's start) to the top; the coast-down is the fall
  * from the top until the speed drops below 5 % again, rises again, or the log ends. A rise or fall of
  * less than 30 % of the top speed is not counted as a segment.
  */
@@ -14,6 +14,8 @@ public final class SegmentDetector {
     public static final double TOP_BAND = 0.02;
     /** Speed, as a share of the top speed, below which the rotor counts as stopped. */
     public static final double LOW_SHARE = 0.05;
+    /** Speed, as a share of the top speed, below which a run-up is taken to start from rest. */
+    public static final double START_SHARE = 0.005;
     /** Smallest speed change, as a share of the top speed, that makes a segment. */
     public static final double MIN_CHANGE_SHARE = 0.30;
 
@@ -50,9 +52,9 @@ public final class SegmentDetector {
         while (hiEnd < n - 1 && w[hiEnd + 1] >= band) {
             hiEnd++;
         }
-        // run-up: back from the top to the last low sample
+        // run-up: back from the top to standstill (the rotor starts from rest when the air comes on)
         int ruStart = hiStart;
-        while (ruStart > 0 && w[ruStart - 1] > low && w[ruStart - 1] <= w[ruStart] + top * TOP_BAND) {
+        while (ruStart > 0 && w[ruStart - 1] > START_SHARE * top && w[ruStart - 1] <= w[ruStart] + top * TOP_BAND) {
             ruStart--;
         }
         // coast-down: forward from the top until low, a renewed rise, or the end

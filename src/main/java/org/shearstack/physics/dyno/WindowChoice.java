@@ -5,12 +5,13 @@ import java.util.Locale;
 /**
  * The Savitzky–Golay window used on one segment and why.
  *
- * @param points    odd number of samples in the window
+ * @param points    odd number of samples in the window (the smallest, where the speed changes fastest)
+ * @param maxPoints the largest window used in the segment (equal to points for a fixed window)
  * @param order     polynomial order
- * @param durationS window length in seconds at the median sample period
+ * @param durationS length of the smallest window in seconds at the median sample period
  * @param reason    one sentence stating the rule that chose it
  */
-public record WindowChoice(int points, int order, double durationS, String reason) {
+public record WindowChoice(int points, int maxPoints, int order, double durationS, String reason) {
     /** Fewest points any window may have. */
     public static final int MIN_POINTS = 5;
     /** Most points an automatic window takes. */
@@ -64,7 +65,7 @@ public record WindowChoice(int points, int order, double durationS, String reaso
                     + " spans less than 10 %% of the %s speed change (%.4g) at its steepest slope"
                     + " (common practice, physics.md §8.2)", pts, pts * period, period, label, change);
         }
-        return new WindowChoice(pts, 2, pts * period, why + "; quadratic Savitzky–Golay fit");
+        return new WindowChoice(pts, pts, 2, pts * period, why + "; quadratic Savitzky–Golay fit");
     }
 
     /** A window given by the user. */
@@ -73,9 +74,57 @@ public record WindowChoice(int points, int order, double durationS, String reaso
             throw new IllegalArgumentException("window must be an odd number of points >= 5, found " + points);
         }
         double period = medianPeriod(timeS);
-        return new WindowChoice(points, 2, points * period,
+        return new WindowChoice(points, points, 2, points * period,
                 String.format(Locale.ROOT, "%d points (%.3g s), given on the command line; quadratic Savitzky–Golay"
                         + " fit", points, points * period));
+    }
+
+    /**
+     * Applies the same 10 % rule at every sample with the local slope of a first smoothing: where the speed
+     * changes slowly the window grows (up to 101 points and a third of the segment), which cuts the noise of the
+     * derivative without letting any window span more than 10 % of the segment's speed change.
+     *
+     * @param pilot      the segment's window from {@link #choose}
+     * @param slope      dω/dt from a first smoothing with the pilot window
+     * @return the per-sample windows and the choice that describes them
+     */
+    public static Local local(WindowChoice pilot, double[] timeS, double[] speed, double[] slope, String label) {
+        int n = speed.length;
+        double period = medianPeriod(timeS);
+        double lo = Double.POSITIVE_INFINITY;
+        double hi = Double.NEGATIVE_INFINITY;
+        for (double w : speed) {
+            lo = Math.min(lo, w);
+            hi = Math.max(hi, w);
+        }
+        double change = hi - lo;
+        int cap = Math.max(pilot.points(), Math.min(MAX_POINTS, n / 3));
+        if (cap % 2 == 0) {
+            cap--;
+        }
+        int[] win = new int[n];
+        int min = Integer.MAX_VALUE;
+        int max = 0;
+        for (int i = 0; i < n; i++) {
+            double a = Math.abs(slope[i]);
+            int byRule = a > 0 ? (int) Math.min(cap, Math.floor(SPEED_CHANGE_SHARE * change / a / period)) : cap;
+            int p = Math.max(pilot.points(), Math.min(byRule, cap));
+            if (p % 2 == 0) {
+                p--;
+            }
+            win[i] = Math.max(pilot.points(), p);
+            min = Math.min(min, win[i]);
+            max = Math.max(max, win[i]);
+        }
+        String why = String.format(Locale.ROOT, "%d to %d points (%.3g to %.3g s at %.3g s per sample): at each sample"
+                + " the largest odd window that spans less than 10 %% of the %s speed change (%.4g) at the local slope"
+                + " (common practice, physics.md §8.2); quadratic Savitzky–Golay fit", min, max, min * period,
+                max * period, period, label, change);
+        return new Local(win, new WindowChoice(min, max, pilot.order(), min * period, why));
+    }
+
+    /** Per-sample windows and their description. */
+    public record Local(int[] windows, WindowChoice choice) {
     }
 
     static double medianPeriod(double[] timeS) {

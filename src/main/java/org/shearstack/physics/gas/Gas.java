@@ -34,7 +34,8 @@ public record Gas(double gamma, double gasConstantJPerKgK, double sutherlandMuRe
     /** Dynamic viscosity by Sutherland's law μ = μ_ref (T/T_ref)^1.5 (T_ref + S)/(T + S). */
     public double viscosityPaS(double temperatureK) {
         requirePositive(temperatureK, "temperatureK");
-        return sutherlandMuRefPaS * Math.pow(temperatureK / sutherlandTRefK, 1.5)
+        double x = temperatureK / sutherlandTRefK;
+        return sutherlandMuRefPaS * x * Math.sqrt(x)
                 * (sutherlandTRefK + sutherlandConstantK) / (temperatureK + sutherlandConstantK);
     }
 

@@ -15,17 +15,20 @@ public enum FrictionClosure {
 
     /** Reynolds number on 2b where laminar and Blasius laws cross. */
     public static final double TRANSITION_REYNOLDS = Math.pow(24.0 / 0.0791, 4.0 / 3.0);
-    private static final double BLEND_EXPONENT = 8.0;
 
     /** f/f_lam at a Reynolds number ρ|V|·2b/μ. */
     public double multiplier(double reynoldsOnTwoGaps) {
         if (this == LAMINAR || !(reynoldsOnTwoGaps > 0)) {
             return 1.0;
         }
-        double ratio = 0.0791 * Math.pow(reynoldsOnTwoGaps, 0.75) / 24.0;
+        double root = Math.sqrt(reynoldsOnTwoGaps);
+        double ratio = 0.0791 * root * Math.sqrt(root) / 24.0; // Re^(3/4)
         if (ratio < 0.05) {
             return 1.0;
         }
-        return Math.pow(1.0 + Math.pow(ratio, BLEND_EXPONENT), 1.0 / BLEND_EXPONENT);
+        // (1 + ratio^8)^(1/8) with n = 8 written as repeated squares and square roots
+        double r2 = ratio * ratio;
+        double r4 = r2 * r2;
+        return Math.sqrt(Math.sqrt(Math.sqrt(1.0 + r4 * r4)));
     }
 }

@@ -4,7 +4,9 @@ import java.util.OptionalDouble;
 import org.shearstack.physics.gas.Gas;
 import org.shearstack.physics.gas.Nozzle;
 import org.shearstack.physics.rotor.Calibration;
+import org.shearstack.physics.rotor.FrictionClosure;
 import org.shearstack.physics.rotor.GapFlowClosedForm;
+import org.shearstack.physics.rotor.GapMarch;
 import org.shearstack.physics.rotor.LossModel;
 import org.shearstack.physics.rotor.OperatingPoint;
 import org.shearstack.physics.rotor.TurbineGeometry;
@@ -24,14 +26,19 @@ import org.shearstack.physics.supply.SupplyPath;
  * @param objective        what to maximise
  * @param targetSpeed      the target speed, rad/s, when the spec gives one
  * @param tipSpeedCapMPerS highest rim speed the optimiser may use when no target speed is given
+ * @param calibration      loss coefficients (nominal, or fitted from the spec's calibration file)
  */
 record SizingModel(SupplyPath supply, Nozzle nozzle, double jetAngleDeg, double printerNozzleMm, double lineWidthMm,
-        Objective objective, OptionalDouble targetSpeed, double tipSpeedCapMPerS) {
+        Objective objective, OptionalDouble targetSpeed, double tipSpeedCapMPerS, Calibration calibration) {
 
     /** Target slip-decay number for the first guess of the disc count (physics.md §3.8b (i): Λ ≥ 3). */
     static final double TARGET_SLIP_DECAY = 4.0;
     /** Exhaust port area as a fraction of the disc area inside r₁ (spokes and hub take the rest). */
     static final double PORT_AREA_FRACTION = 0.45;
+    /** Gap-march steps while ranking candidates (the final performance uses the full default). */
+    static final int SIZING_STEPS = 16;
+    /** Relative tolerance on the speed of the best objective while ranking candidates. */
+    static final double SPEED_TOLERANCE = 0.02;
 
     /** A scored candidate: objective value and the speed where it was found. */
     record Score(double value, double speedRadPerS, OperatingPoint point) {
@@ -55,7 +62,8 @@ record SizingModel(SupplyPath supply, Nozzle nozzle, double jetAngleDeg, double 
                 endClearanceMm(t.gapMm(), printerNozzleMm) / 1000.0,
                 radialClearanceMm(t.diameterMm(), lineWidthMm) / 1000.0, portAreaMm2(t.exhaustDiameterMm()) * 1e-6,
                 jetAngleDeg);
-        return TurbineModel.of(supply, nozzle, g, LossModel.twoShielded608(), Calibration.nominal());
+        return new TurbineModel(Gas.AIR, supply, nozzle, g, LossModel.twoShielded608(), calibration,
+                FrictionClosure.BLENDED, GapMarch.Integration.EXPONENTIAL, SIZING_STEPS);
     }
 
     /** Objective at the target speed, or its best over [0, min(runaway, cap/r₂)]. */
@@ -65,13 +73,16 @@ record SizingModel(SupplyPath supply, Nozzle nozzle, double jetAngleDeg, double 
             OperatingPoint p = m.at(targetSpeed.getAsDouble());
             return new Score(objective.of(p), p.speedRadPerS(), p);
         }
-        double runaway = m.runawaySpeedRadPerS();
-        double top = Math.min(runaway, tipSpeedCapMPerS / m.geometry().outerRadiusM());
+        double top = tipSpeedCapMPerS / m.geometry().outerRadiusM();
+        if (m.at(top).shaftTorqueNm() <= 0.0) {
+            // the rotor runs away below the cap: search up to the runaway speed instead
+            top = m.runawaySpeedRadPerS();
+        }
         if (!(top > 0)) {
             OperatingPoint p = m.at(0.0);
             return new Score(0.0, 0.0, p);
         }
-        double w = GoldenSection.maximize(s -> objective.of(m.at(s)), 0.0, top, 1e-3 * top);
+        double w = GoldenSection.maximize(s -> objective.of(m.at(s)), 0.0, top, SPEED_TOLERANCE * top);
         OperatingPoint p = m.at(w);
         return new Score(objective.of(p), w, p);
     }

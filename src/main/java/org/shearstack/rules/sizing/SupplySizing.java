@@ -9,6 +9,7 @@ import static org.shearstack.rules.SpecKeys.SUPPLY_CONDUCTANCE;
 import static org.shearstack.rules.SpecKeys.SUPPLY_CRITICAL_RATIO;
 import static org.shearstack.rules.SpecKeys.SUPPLY_FREE_AIR_FLOW;
 import static org.shearstack.rules.SpecKeys.SUPPLY_FREE_AIR_FLOW_PRESSURE;
+import static org.shearstack.rules.SpecKeys.SUPPLY_PRESSURE;
 import static org.shearstack.rules.SpecKeys.SUPPLY_TEMPERATURE;
 
 import java.util.List;
@@ -23,6 +24,7 @@ import org.shearstack.rules.InputRejectedException;
 import org.shearstack.rules.Rule;
 import org.shearstack.rules.RuleInputs;
 import org.shearstack.rules.RuleOutputs;
+import org.shearstack.spec.QuantityFormat;
 
 /** SIZE-SUPPLY-PATH and SIZE-SUPPLY-CRITICAL-RATIO: the ISO 6358 characteristic of the supply path. */
 final class SupplySizing {
@@ -36,7 +38,7 @@ final class SupplySizing {
     static List<Rule> rules() {
         return List.of(
                 FunctionRule.of("SIZE-SUPPLY-PATH",
-                        List.of(SUPPLY_CONDUCTANCE, SUPPLY_FREE_AIR_FLOW, SUPPLY_FREE_AIR_FLOW_PRESSURE,
+                        List.of(SUPPLY_PRESSURE, SUPPLY_CONDUCTANCE, SUPPLY_FREE_AIR_FLOW, SUPPLY_FREE_AIR_FLOW_PRESSURE,
                                 SUPPLY_BLOWDOWN_TANK, SUPPLY_BLOWDOWN_FROM, SUPPLY_BLOWDOWN_TO, SUPPLY_BLOWDOWN_TIME,
                                 SUPPLY_TEMPERATURE, SUPPLY_AMBIENT, SizingKeys.SUPPLY_CRITICAL_PRESSURE_RATIO),
                         List.of(SizingKeys.SUPPLY_PATH_CONDUCTANCE), SupplySizing::conductance),
@@ -57,17 +59,32 @@ final class SupplySizing {
     private static void conductance(RuleInputs in, RuleOutputs out) {
         Gas air = Gas.AIR;
         double b = in.get(SizingKeys.SUPPLY_CRITICAL_PRESSURE_RATIO);
+        double ambient = in.get(SUPPLY_AMBIENT);
+        if (!(in.get(SUPPLY_PRESSURE) > ambient)) {
+            throw new InputRejectedException(SUPPLY_PRESSURE, "a supply pressure above the ambient pressure",
+                    QuantityFormat.format(in.get(SUPPLY_PRESSURE), SUPPLY_PRESSURE.dimension()));
+        }
         if (in.has(SUPPLY_CONDUCTANCE)) {
             out.put(SizingKeys.SUPPLY_PATH_CONDUCTANCE, in.get(SUPPLY_CONDUCTANCE), "C as given in the spec",
                     "ISO 6358 (spec supply.conductance)");
         } else if (in.has(SUPPLY_FREE_AIR_FLOW)) {
             double p1 = in.get(SUPPLY_FREE_AIR_FLOW_PRESSURE);
+            if (!(p1 > ambient)) {
+                throw new InputRejectedException(SUPPLY_FREE_AIR_FLOW, "a free-air flow measured at a pressure above"
+                        + " ambient", QuantityFormat.format(p1, SUPPLY_FREE_AIR_FLOW_PRESSURE.dimension()));
+            }
             FlowCharacteristic c = FlowCharacteristic.fromFreeAirFlow(in.get(SUPPLY_FREE_AIR_FLOW), p1,
                     in.get(SUPPLY_AMBIENT), b, 0.5);
             out.put(SizingKeys.SUPPLY_PATH_CONDUCTANCE, c.conductanceM3PerSPa(),
                     "C = free-air flow / (p₁ · subsonic factor of ISO 6358 at p_ambient/p₁ with b)",
                     "ISO 6358 flow equation with the ISO 8778 reference atmosphere (physics.md §2.1)");
         } else if (in.has(SUPPLY_BLOWDOWN_TANK)) {
+            if (!(in.get(SUPPLY_BLOWDOWN_FROM) > in.get(SUPPLY_BLOWDOWN_TO))
+                    || !(in.get(SUPPLY_BLOWDOWN_TO) > 0)) {
+                throw new InputRejectedException(SUPPLY_BLOWDOWN_TO, "an end pressure below the start pressure "
+                        + QuantityFormat.format(in.get(SUPPLY_BLOWDOWN_FROM), SUPPLY_BLOWDOWN_FROM.dimension()),
+                        QuantityFormat.format(in.get(SUPPLY_BLOWDOWN_TO), SUPPLY_BLOWDOWN_TO.dimension()));
+            }
             Blowdown test = new Blowdown(in.get(SUPPLY_BLOWDOWN_TANK), in.get(SUPPLY_BLOWDOWN_FROM),
                     in.get(SUPPLY_BLOWDOWN_TO), in.get(SUPPLY_BLOWDOWN_TIME), in.get(SUPPLY_TEMPERATURE));
             BlowdownEstimate e = test.estimate(air);

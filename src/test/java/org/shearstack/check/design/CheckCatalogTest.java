@@ -62,6 +62,19 @@ class CheckCatalogTest {
     }
 
     @Test
+    void hoopSectionIsTheRingLessPlenumAndAnchorHole() {
+        // ring 103 → 143 mm: 20 mm of material, less a 5.5 mm plenum and a 4.2 mm anchor hole = 10.3 mm
+        ResolvedDesign d = TestDesigns.petg(6, 100)
+                .n("housing.outside-diameter", org.shearstack.spec.Dimension.LENGTH, 143)
+                .n("housing.plenum-diameter", org.shearstack.spec.Dimension.LENGTH, 5.5).build();
+        Finding hoop = new Containment().run(d).stream().filter(x -> x.code().equals("HOUSING-HOOP")).findFirst()
+                .orElseThrow();
+        double a = 0.0515;
+        double b = a + 0.0103;
+        assertEquals(6e5 * (b * b + a * a) / (b * b - a * a) / 1e6, hoop.measured(), 1e-6);
+    }
+
+    @Test
     void slowModelsAreAskedOncePerQuestion() {
         int[] calls = {0};
         RunawaySource counting = v -> variant -> {

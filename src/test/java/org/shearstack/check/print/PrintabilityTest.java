@@ -50,13 +50,23 @@ class PrintabilityTest {
     }
 
     @Test
-    void finNarrowerThanNozzleFails() {
-        Region base = Region.rectangle(CTX, 0, 0, 10, 10).union(Region.rectangle(CTX, 10, 4.85, 16, 5.15));
-        List<Finding> f = check(LayeredSolid.extrusion(base, 0, 3));
+    void freeStandingFinNarrowerThanNozzleFails() {
+        Region parts = Region.rectangle(CTX, 0, 0, 10, 10).union(Region.rectangle(CTX, 12, 4.85, 18, 5.15));
+        List<Finding> f = check(LayeredSolid.extrusion(parts, 0, 3));
         Finding fin = f.stream().filter(x -> x.code().equals("PRINT-FEATURE-SMALL")).findFirst().orElseThrow();
         assertEquals(Severity.FAIL, fin.severity());
         assertEquals(0.3, fin.measured(), 0.02);
-        assertTrue(fin.where().xMm() > 10 && fin.where().xMm() < 16, fin.toString());
+        assertTrue(fin.where().xMm() > 12 && fin.where().xMm() < 18, fin.toString());
+    }
+
+    @Test
+    void attachedFinNarrowerThanNozzleIsACaution() {
+        Region base = Region.rectangle(CTX, 0, 0, 10, 10).union(Region.rectangle(CTX, 10, 4.85, 16, 5.15));
+        List<Finding> f = check(LayeredSolid.extrusion(base, 0, 3));
+        Finding fin = f.stream().filter(x -> x.code().equals("WALL-THIN")).findFirst().orElseThrow();
+        assertEquals(Severity.CAUTION, fin.severity());
+        assertTrue(fin.message().contains("narrower than the nozzle"), fin.message());
+        assertTrue(f.stream().noneMatch(x -> x.severity() == Severity.FAIL), f.toString());
     }
 
     @Test

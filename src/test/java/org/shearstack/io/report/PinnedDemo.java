@@ -1,24 +1,18 @@
 package org.shearstack.io.report;
 
 import java.nio.file.Path;
-import java.util.ArrayList;
-import java.util.List;
 import java.util.Optional;
 import org.shearstack.job.DesignJob;
 import org.shearstack.job.DesignResult;
 import org.shearstack.job.JobOptions;
 import org.shearstack.profile.Profiles;
-import org.shearstack.rules.Engine;
-import org.shearstack.rules.PrinterRules;
-import org.shearstack.rules.Rule;
-import org.shearstack.rules.geometry.GeometryRules;
 import org.shearstack.spec.Spec;
 import org.shearstack.spec.SpecReader;
 
 /**
  * The invented classroom scenario with its rotor sizes pinned (src/test/resources/report/pinned-demo.yaml), run
- * through the design job with the printer and geometry rules, so the report has a performance map, a burst check
- * and derivations to show.
+ * through the design job, so the report has a performance map, a burst check and derivations whatever the sizing
+ * rules would choose.
  */
 public final class PinnedDemo {
 
@@ -30,8 +24,6 @@ public final class PinnedDemo {
     public static DesignResult run(int mapPoints) {
         Spec spec = SpecReader.read(SPEC).orThrow();
         Profiles profiles = Profiles.load(Optional.empty());
-        List<Rule> rules = new ArrayList<>(PrinterRules.rules());
-        rules.addAll(GeometryRules.rules(profiles));
-        return DesignJob.run(spec, profiles, Engine.of(rules), new JobOptions(false, false, mapPoints));
+        return DesignJob.run(spec, profiles, new JobOptions(false, false, mapPoints));
     }
 }

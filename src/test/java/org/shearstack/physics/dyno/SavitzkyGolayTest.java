@@ -55,6 +55,24 @@ class SavitzkyGolayTest {
         }
     }
 
+    /** Per-sample windows (5 to 15 points) still reproduce a quadratic exactly. */
+    @Test
+    void perSampleWindowsAreExactOnAQuadratic() {
+        int n = 40;
+        double[] t = new double[n];
+        double[] y = new double[n];
+        int[] w = new int[n];
+        for (int i = 0; i < n; i++) {
+            t[i] = 0.05 * i;
+            y[i] = 100 + 20 * t[i] - 3 * t[i] * t[i];
+            w[i] = 5 + 2 * (i % 6);
+        }
+        SavitzkyGolay.Smoothed s = SavitzkyGolay.apply(t, y, w, 2);
+        for (int i = 0; i < n; i++) {
+            assertEquals(20 - 6 * t[i], s.perSecond()[i], 1e-9, "slope at " + i);
+        }
+    }
+
     @Test
     void rejectsEvenWindowWithMessage() {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
