@@ -61,7 +61,8 @@ public final class Bom {
         }
         if (d.generator()) {
             rows.add(hw("screw " + d.motorScrews() + " × " + n(d.bracketScrewLength()), 2,
-                    "motor face screws ISO 4762 " + d.motorScrews()));
+                    "countersunk motor face screws (90°, e.g. ISO 7046-1) " + d.motorScrews()
+                            + ", entered from the coupling side into the bracket's countersinks"));
             rows.add(hw("generator", 1, "cylindrical DC motor as in the spec"));
         }
         return List.copyOf(rows);

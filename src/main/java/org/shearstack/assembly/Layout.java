@@ -59,7 +59,8 @@ public final class Layout {
             p.add(new PartDef("coupling-hub-turbine", "coupling", true, 1, Coupling::turbineHub));
             p.add(new PartDef("coupling-disc", "coupling", true, 0, Coupling::centreDisc));
             p.add(new PartDef("coupling-hub-generator", "coupling", true, 1, Coupling::generatorHub));
-            p.add(new PartDef("generator-bracket", "bracket", false, 10 + bolts, GeneratorBracket::solid));
+            p.add(new PartDef("generator-bracket", "bracket", false, GeneratorBracket.genus(d),
+                    GeneratorBracket::solid));
         }
         return List.copyOf(p);
     }

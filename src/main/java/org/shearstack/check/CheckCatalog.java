@@ -35,7 +35,7 @@ public final class CheckCatalog {
     public static List<Check> all(RunawaySource source) {
         RunawaySource cached = cached(source);
         return List.of(new BurstAtRunaway(cached), new Containment(), new Dynamics(cached), new Bearings(cached),
-                new Fits(), new StackUps());
+                new Fits(), new StackUps(), new org.shearstack.check.flow.GapSearchBound());
     }
 
     /** Runs every check and returns the findings, worst first within the catalogue order. */

@@ -39,8 +39,8 @@ final class DesignLink {
     static Data load(Source source, Path design, Double inertiaKgM2, double extraKgM2) {
         Optional<Design> d = design == null ? Optional.empty() : Optional.of(source.load(design));
         Optional<TurbineModel> model = d.flatMap(Design::model);
-        Optional<Prediction> prediction = model.map(m -> new Prediction(w -> m.at(w).shaftTorqueNm(),
-                Prediction.Basis.SHAFT, "performance model of " + d.get().name()));
+        Optional<Prediction> prediction = model.map(m -> new Prediction(tabulated(m), Prediction.Basis.SHAFT,
+                "performance model of " + d.get().name()));
         String extra = extraKgM2 > 0 ? String.format(Locale.ROOT, " + --extra-inertia %.4g kg*m^2", extraKgM2) : "";
         if (inertiaKgM2 != null) {
             return new Data(inertiaKgM2 + extraKgM2, String.format(Locale.ROOT, "--inertia %.4g kg*m^2%s",
@@ -55,5 +55,23 @@ final class DesignLink {
                     + "; give --inertia (kg*m^2)");
         }
         return new Data(d.get().rotorInertiaKgM2() + extraKgM2, d.get().inertiaSource() + extra, prediction, model);
+    }
+
+    /**
+     * The model's shaft torque on 81 speeds from 0 to twice its runaway speed, linear in between (the coupled
+     * solve costs about a millisecond; a run-up has hundreds of samples).
+     */
+    static java.util.function.DoubleUnaryOperator tabulated(TurbineModel m) {
+        double top = 2 * Math.max(m.runawaySpeedRadPerS(), 1.0);
+        int n = 80;
+        double[] t = new double[n + 1];
+        for (int i = 0; i <= n; i++) {
+            t[i] = m.at(top * i / n).shaftTorqueNm();
+        }
+        return w -> {
+            double x = Math.max(0, Math.min(n, w / top * n));
+            int i = Math.min(n - 1, (int) x);
+            return t[i] + (x - i) * (t[i + 1] - t[i]);
+        };
     }
 }

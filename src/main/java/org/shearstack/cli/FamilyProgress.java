@@ -23,6 +23,7 @@ final class FamilyProgress implements FamilyRunner.Listener {
     private long lastDrawNanos;
     private int lastTenth = -1;
     private int width;
+    private String last = "";
 
     FamilyProgress(PrintWriter err, boolean inPlace, LongSupplier nanoClock) {
         this.err = err;
@@ -43,6 +44,7 @@ final class FamilyProgress implements FamilyRunner.Listener {
     public void finished(FamilyRow row, int done, int failed, int total) {
         long now = nanoClock.getAsLong();
         String line = line(done, failed, total, now - startNanos);
+        last = line;
         if (inPlace) {
             if (now - lastDrawNanos >= REDRAW_NANOS || done == total) {
                 lastDrawNanos = now;
@@ -64,10 +66,10 @@ final class FamilyProgress implements FamilyRunner.Listener {
         }
     }
 
-    /** Ends an in-place line early (a stop). */
+    /** Ends an in-place line early (a stop), showing the last counts. */
     void close() {
         if (inPlace) {
-            err.println();
+            err.println("\r" + last + (last.length() < width ? " ".repeat(width - last.length()) : ""));
             err.flush();
         }
     }

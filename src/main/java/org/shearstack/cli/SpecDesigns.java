@@ -26,7 +26,7 @@ import org.shearstack.spec.SpecReader;
  * performance model when the design resolves one.
  */
 final class SpecDesigns implements DesignLink.Source {
-    private static final double CHORD_TOLERANCE_MM = 0.02;
+    private static final double CHORD_TOLERANCE_MM = 0.05;
     private final Profiles profiles;
 
     SpecDesigns(Profiles profiles) {

@@ -32,10 +32,11 @@ import picocli.CommandLine.Parameters;
  * and why an average "free-air speed" is not the jet speed.
  */
 @Command(name = "supply", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
-        description = {"What the air supply delivers: ISO 6358 sonic conductance C and critical ratio b (from a",
-            "conductance, a free-air flow or a tank blow-down), effective orifice area, mass and free-air flow at",
-            "pressures, run time from the tank alone, and why free-air flow / hose bore is not the jet speed.",
-            "Options override the spec's supply section. Pressures: bar(g) gauge, bar(a) absolute."})
+        description = {"What the air supply delivers: ISO 6358 sonic conductance C and critical ratio b (from a"
+            + " conductance, a free-air flow or a tank blow-down), effective orifice area, mass and free-air flow"
+            + " at pressures, run time from the tank alone, and why free-air flow / hose bore is not the jet speed.",
+            "Options override the spec's supply section. Pressures: a bare bar or psi is gauge; bar(g) gauge,"
+            + " bar(a) absolute."})
 public final class SupplyCommand implements Callable<Integer> {
 
     private static final Gas AIR = Gas.AIR;

@@ -80,7 +80,8 @@ public final class ViewCommand implements Callable<Integer> {
             return badInput(err, problems);
         }
         try {
-            SceneSource source = sample ? SceneSources.sample() : SceneSources.forPath(input, profileOptions.load());
+            SceneSource source = sample ? SceneSources.sample() : SceneSources.forPath(input, profileOptions.load(),
+                    DesignViewScenes::of);
             if (!ViewLauncher.displayAvailable()) {
                 err.println("shearstack: view needs a display, and none is set (DISPLAY is empty). "
                         + "Headless, run: xvfb-run -a shearstack view ...");

@@ -1,6 +1,7 @@
 package org.shearstack.family;
 
 import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -21,8 +22,11 @@ import org.shearstack.spec.Spec;
  * The family's variant pipeline is the design command's own: {@link DesignJob} (spec → rules → model → checks →
  * kit → report content) and {@link DesignOutput} (every file, atomically). One rule engine serves every variant
  * (it holds no state). With check-only, a variant's folder holds only its report.json (no meshes, no HTML page).
+ * The table row is read back from the report.json text written, so the two cannot disagree.
  */
 public final class DesignPipeline implements VariantPipeline {
+
+    private static final ObjectMapper JSON = new ObjectMapper();
 
     private final Profiles profiles;
     private final Engine engine;
@@ -43,14 +47,14 @@ public final class DesignPipeline implements VariantPipeline {
     public JsonNode run(Spec spec, Path folder) throws IOException {
         JobOptions options = checkOnly ? JobOptions.checkOnly() : JobOptions.full().withPreview(false);
         DesignResult result = DesignJob.run(spec, profiles, engine, options);
-        JsonNode tree = ReportJson.tree(result.report());
         if (checkOnly) {
             String json = ReportJson.text(result.report());
             AtomicFolder.write(folder, dir -> Files.writeString(dir.resolve(ReportWriter.JSON), json,
                     StandardCharsets.UTF_8));
-        } else {
-            DesignOutput.write(result, folder);
+            return JSON.readTree(json);
         }
-        return tree;
+        DesignOutput.Written written = DesignOutput.write(result, folder);
+        // the row is read from the very file the variant's folder holds
+        return JSON.readTree(written.folder().resolve(ReportWriter.JSON).toFile());
     }
 }

@@ -19,15 +19,15 @@ public final class Coupling {
     }
 
     public static LayeredSolid turbineHub(Dims d, GeometryContext ctx) {
-        return hub(d, ctx, Shapes.dBore(ctx, d.turbineBore(), d.flatDepth()));
+        return hub(d, ctx, Shapes.dBore(ctx, d.turbineBore(), d.flatDepth()), d.couplingDiameter());
     }
 
     public static LayeredSolid generatorHub(Dims d, GeometryContext ctx) {
-        return hub(d, ctx, Region.boreCircle(ctx, 0, 0, d.generatorBore()));
+        return hub(d, ctx, Region.boreCircle(ctx, 0, 0, d.generatorBore()), d.generatorHubDiameter());
     }
 
-    private static LayeredSolid hub(Dims d, GeometryContext ctx, Region bore) {
-        double od = d.couplingDiameter();
+    /** A hub of diameter {@code od}; the generator's is smaller, so it turns inside the motor screws' heads. */
+    private static LayeredSolid hub(Dims d, GeometryContext ctx, Region bore, double od) {
         Region body = Region.disc(ctx, 0, 0, od).minus(bore);
         Region tongue = Region.disc(ctx, 0, 0, od).intersect(Region.centredRectangle(ctx, 0, 0, od + 2, d.tongueWidth()))
                 .minus(bore);

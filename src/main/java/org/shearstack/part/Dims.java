@@ -32,7 +32,8 @@ public record Dims(
         boolean generator, double couplingDiameter, double couplingHub, double tongueHeight, double tongueWidth,
         double couplingDisc, double turbineBore, double generatorBore, double couplingClearance,
         double bracketStandoff, double bracketSeat, double bracketWall, double bracketPlate, double bracketCup,
-        double bracketScrewHole, double bracketCentreHole, double bracketScrewLength, double motorSpacing,
+        double bracketScrewHole, double bracketCentreHole, double bracketScrewLength, double bracketCountersink,
+        double generatorHubDiameter, double motorSpacing,
         String motorScrews,
         double targetDiameter, double targetThickness, double stubLength, double driveLength,
         double layerHeight, double lineWidth, double holeCompensation) {
@@ -73,6 +74,7 @@ public record Dims(
                 v.get(COUPLING_GENERATOR_BORE), v.get(COUPLING_CLEARANCE),
                 v.get(BRACKET_STANDOFF), v.get(BRACKET_SEAT_DIAMETER), v.get(BRACKET_WALL), v.get(BRACKET_PLATE),
                 v.get(BRACKET_CUP_HEIGHT), v.get(BRACKET_SCREW_HOLE), v.get(BRACKET_CENTRE_HOLE), v.get(BRACKET_SCREW_LENGTH),
+                v.get(BRACKET_COUNTERSINK), v.get(COUPLING_GENERATOR_HUB_DIAMETER),
                 gen ? v.get(GENERATOR_MOUNT_SPACING) : 0, gen ? v.text(GENERATOR_MOUNT_SCREWS) : "",
                 v.get(TARGET_DIAMETER), v.get(TARGET_THICKNESS), v.get(STUB_LENGTH), v.get(DRIVE_LENGTH),
                 v.get(LAYER_HEIGHT), v.get(LINE_WIDTH), v.get(HOLE_COMPENSATION));

@@ -42,6 +42,8 @@ public final class EndCover {
         } else {
             cuts.addAll(anchors(d, ctx, start));
             cuts.add(new Feature(0, d.portPilotDepth(), Region.boreCircle(ctx, d.plenumRadius(), 0, d.portPilot())));
+            cuts.addAll(roof(d, d.portPilotDepth(), t, d.portPilot(), d.portFeed(),
+                    dia -> Region.boreCircle(ctx, d.plenumRadius(), 0, dia)));
             cuts.add(new Feature(0, t, Region.boreCircle(ctx, d.plenumRadius(), 0, d.portFeed())));
         }
         return stack(ctx, Region.disc(ctx, 0, 0, d.housingOutside()), 0, t, cuts);
@@ -58,14 +60,45 @@ public final class EndCover {
                     pockets.add(Region.regularPolygon(ctx, r * Shapes.cosDeg(a), r * Shapes.sinDeg(a), 6,
                             d.nutAcrossFlats(), a));
                 }
-                yield List.of(new Feature(0, t, Shapes.holeCircle(ctx, d.boltCount(), d.boltCircle(), d.anchorHole(), start)),
-                        new Feature(0, d.anchorDepth(), Region.unionAll(ctx, pockets)));
+                List<Feature> f = new ArrayList<>();
+                f.add(new Feature(0, t, Shapes.holeCircle(ctx, d.boltCount(), d.boltCircle(), d.anchorHole(), start)));
+                f.add(new Feature(0, d.anchorDepth(), Region.unionAll(ctx, pockets)));
+                // the pocket's ceiling narrows at 45° to the screw hole, like a drill point
+                f.addAll(roof(d, d.anchorDepth(), t, d.nutAcrossFlats(), d.anchorHole(), af -> {
+                    List<Region> p = new ArrayList<>();
+                    for (int k = 0; k < d.boltCount(); k++) {
+                        double a = start + 360.0 * k / d.boltCount();
+                        p.add(Region.regularPolygon(ctx, r * Shapes.cosDeg(a), r * Shapes.sinDeg(a), 6, af, a));
+                    }
+                    return Region.unionAll(ctx, p);
+                }));
+                yield f;
             }
             case "tapped" -> List.of(new Feature(0, t,
                     Shapes.holeCircle(ctx, d.boltCount(), d.boltCircle(), d.anchorHole(), start)));
             default -> List.of(new Feature(t - d.anchorDepth(), t,
                     Shapes.holeCircle(ctx, d.boltCount(), d.boltCircle(), d.anchorHole(), start)));
         };
+    }
+
+    /**
+     * The ceiling over a wide pocket printed from below, stepped inward by one layer height per layer (45°,
+     * as a drill point leaves it) until it meets the narrower hole above: the 45° overhang rule of FFF printing
+     * (common practice), so the ceiling prints without support or bridging. {@code shape} gives the cut for a
+     * size (diameter or across-flats); the steps stop below {@code top}.
+     */
+    static List<Feature> roof(Dims d, double from, double top, double wide, double narrow,
+            java.util.function.DoubleFunction<Region> shape) {
+        List<Feature> out = new ArrayList<>();
+        double layer = d.layerHeight();
+        double size = wide - 2 * layer;
+        double u = from;
+        while (size > narrow && u + layer <= top) {
+            out.add(new Feature(u, u + layer, shape.apply(size)));
+            size -= 2 * layer;
+            u += layer;
+        }
+        return out;
     }
 
     /** Arc openings between the seat wall and the disc ports, webs between them. */
@@ -85,26 +118,44 @@ public final class EndCover {
     record Feature(double u0, double u1, Region cut) {
     }
 
-    /** Builds slabs between all feature heights, each slab the outline minus the cuts that cover it. */
+    /**
+     * Builds slabs between all feature heights, each slab the outline minus the cuts that cover it. Cuts through
+     * the whole height are taken out once; each slab then takes out the union of its own partial cuts (one
+     * overlay per distinct set of cuts rather than one per cut and slab).
+     */
     static LayeredSolid stack(GeometryContext ctx, Region outline, double u0, double u1, List<Feature> cuts) {
+        double lo = ctx.snap(u0);
+        double hi = ctx.snap(u1);
         TreeSet<Double> zs = new TreeSet<>();
-        zs.add(ctx.snap(u0));
-        zs.add(ctx.snap(u1));
+        zs.add(lo);
+        zs.add(hi);
+        List<Region> through = new ArrayList<>();
+        List<Feature> partial = new ArrayList<>();
         for (Feature f : cuts) {
             zs.add(ctx.snap(f.u0()));
             zs.add(ctx.snap(f.u1()));
+            if (ctx.snap(f.u0()) <= lo && ctx.snap(f.u1()) >= hi) {
+                through.add(f.cut());
+            } else {
+                partial.add(f);
+            }
         }
-        List<Double> levels = new ArrayList<>(zs.subSet(ctx.snap(u0), true, ctx.snap(u1), true));
+        Region base = through.isEmpty() ? outline : outline.minus(Region.unionAll(ctx, through));
+        List<Double> levels = new ArrayList<>(zs.subSet(lo, true, hi, true));
+        java.util.Map<java.util.BitSet, Region> bySet = new java.util.HashMap<>();
         List<Slab> slabs = new ArrayList<>();
         for (int i = 0; i + 1 < levels.size(); i++) {
             double a = levels.get(i);
             double b = levels.get(i + 1);
-            Region r = outline;
-            for (Feature f : cuts) {
+            java.util.BitSet active = new java.util.BitSet();
+            for (int k = 0; k < partial.size(); k++) {
+                Feature f = partial.get(k);
                 if (ctx.snap(f.u0()) <= a && ctx.snap(f.u1()) >= b) {
-                    r = r.minus(f.cut());
+                    active.set(k);
                 }
             }
+            Region r = bySet.computeIfAbsent(active, set -> set.isEmpty() ? base
+                    : base.minus(Region.unionAll(ctx, set.stream().mapToObj(k -> partial.get(k).cut()).toList())));
             slabs.add(new Slab(a, b, r));
         }
         return LayeredSolid.of(ctx, slabs);

@@ -36,14 +36,40 @@ public final class HubShaft {
         double z0 = d.shaftZ0();
         Region flat = Shapes.dShaft(ctx, d.journal(), d.flatDepth()).minus(bore);
         Region round = Region.disc(ctx, 0, 0, d.journal()).minus(bore);
-        Region hex = middle;
-        double[] z = {d.shaftZ0(), -d.coverThickness(), d.packZ0(), d.packZ1(), d.driveCoverTop(), d.shaftZ1()};
-        Region[] r = {flat, round, hex, round, flat};
         List<Slab> slabs = new ArrayList<>();
-        for (int i = 0; i < r.length; i++) {
-            slabs.add(new Slab(z[i] - z0, z[i + 1] - z0, r[i]));
-        }
+        slabs.add(new Slab(0, -d.coverThickness() - z0, flat));
+        slabs.add(new Slab(-d.coverThickness() - z0, d.packZ0() - z0, round));
+        slabs.addAll(chamferedHex(d, ctx, middle, bore, d.packZ0() - z0, d.packZ1() - z0));
+        slabs.add(new Slab(d.packZ1() - z0, d.driveCoverTop() - z0, round));
+        slabs.add(new Slab(d.driveCoverTop() - z0, d.shaftZ1() - z0, flat));
         return LayeredSolid.of(ctx, slabs);
+    }
+
+    /**
+     * The hexagon from {@code u0} to {@code u1}, its corners trimmed at the lower end, where it stands on the
+     * narrower journal in print: each corner is cut square to its diagonal by a hexagon turned 30°, whose size
+     * grows by one layer height per layer, so the corners rise at 45° (the 45° overhang rule of FFF printing,
+     * common practice) and print without support. The flats are untouched, so every layer still keys the discs.
+     * Only when the flats themselves stand on the journal (within one layer's step); otherwise the shoulder is
+     * left square (a known gap: such designs get an overhang caution from the printability check).
+     */
+    static List<Slab> chamferedHex(Dims d, GeometryContext ctx, Region hex, Region bore, double u0, double u1) {
+        List<Slab> out = new ArrayList<>();
+        double layer = d.layerHeight();
+        double corner = d.hexAcrossFlats() / Math.sqrt(3);
+        double r = d.journal() / 2;
+        double u = u0;
+        if (d.hexAcrossFlats() / 2 > r + layer) {
+            return List.of(new Slab(u0, u1, hex));
+        }
+        while (r + layer < corner && u + 2 * layer <= u1) {
+            r += layer;
+            Region cut = Region.regularPolygon(ctx, 0, 0, 6, 2 * r, 0);
+            out.add(new Slab(u, u + layer, hex.intersect(cut).minus(bore)));
+            u += layer;
+        }
+        out.add(new Slab(u, u1, hex));
+        return out;
     }
 
     /** Metal-shaft option: the printed hexagonal sleeve that carries the discs. */

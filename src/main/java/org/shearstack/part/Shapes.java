@@ -79,14 +79,17 @@ public final class Shapes {
         NozzleLine n = NozzleLine.of(d);
         double[] pts;
         double ext = Math.max(1.0, d.exitWidth());
+        // past the exit the cut flares at 35° a side, so the housing wall ends in a blunt corner rather than a
+        // knife edge along the chamber (features under the nozzle width do not print, common practice)
+        double flare = 2 * ext * Math.tan(Math.toRadians(35));
         if (d.exitWidth() > d.throatWidth() * (1 + 1e-9)) {
             double diverge = Math.max(3 * (d.exitWidth() - d.throatWidth()), 1.0);
             diverge = Math.min(diverge, 0.5 * n.lengthMm());
             pts = strip(n, new double[] {0, n.lengthMm() - diverge, n.lengthMm(), n.lengthMm() + ext},
-                    new double[] {d.inletWidth(), d.throatWidth(), d.exitWidth(), d.exitWidth()});
+                    new double[] {d.inletWidth(), d.throatWidth(), d.exitWidth(), d.exitWidth() + flare});
         } else {
             pts = strip(n, new double[] {0, n.lengthMm(), n.lengthMm() + ext},
-                    new double[] {d.inletWidth(), d.throatWidth(), d.throatWidth()});
+                    new double[] {d.inletWidth(), d.throatWidth(), d.throatWidth() + flare});
         }
         return Region.polygon(ctx, pts);
     }

@@ -39,12 +39,14 @@ public final class DesignResolver {
         Optional<FilamentProfile> filament = pick(spec, "filament", profiles.filaments(), Profiles::readFilament,
                 problems);
         HardwareNames.check(spec, profiles.hardware(), problems);
+        List<Seed> calibration = org.shearstack.rules.sizing.SpecCalibration.seeds(spec, problems);
         if (!problems.isEmpty()) {
             throw new BadInputException(problems);
         }
         List<Seed> seeds = new ArrayList<>(specSeeds(spec));
         seeds.addAll(ProfileSeeds.printer(printer.orElseThrow()));
         seeds.addAll(ProfileSeeds.filament(filament.orElseThrow()));
+        seeds.addAll(calibration);
         Resolution r = engine.resolve(spec.name(), spec.sourceFile(), seeds);
         java.util.Set<String> reported = new java.util.HashSet<>();
         for (MissingInput m : r.missing()) {

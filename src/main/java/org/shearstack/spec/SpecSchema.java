@@ -103,6 +103,9 @@ public final class SpecSchema {
                 quantity(AREA, Range.aboveUpTo(0, 500, "above 0 and at most 500 mm2"), true), "total throat area"));
         f.add(SpecField.of("nozzle.jet-angle", ANGLE,
                 quantity(ANGLE, Range.between(0, 45, "between 0 and 45 deg"), true), "jet angle to the rotor tangent"));
+        f.add(SpecField.of("calibration", TEXT, name(PROFILE_NAME,
+                "a calibration file written by 'shearstack calibrate' (FILE.yaml, relative to the spec)", false),
+                "bench calibration of the performance model"));
         // printer and filament
         f.add(SpecField.of("printer", TEXT, name(PROFILE_NAME, "a printer profile name or file", false),
                 "printer profile"));

@@ -42,7 +42,8 @@ public final class DesignScenes {
         return new ViewScene(design.name(), List.of(), List.of(), headlines(design), List.of("parts not requested"));
     }
 
-    static GeometryContext previewContext(ResolvedDesign design) {
+    /** The spec's chord tolerance, but no finer than {@link #PREVIEW_CHORD_TOLERANCE_MM}. */
+    public static GeometryContext previewContext(ResolvedDesign design) {
         double tolerance = design.key("output.chord-tolerance").flatMap(design::find)
                 .map(t -> Math.max(t, PREVIEW_CHORD_TOLERANCE_MM)).orElse(PREVIEW_CHORD_TOLERANCE_MM);
         return GeometryContext.withChordTolerance(tolerance);
@@ -52,7 +53,7 @@ public final class DesignScenes {
      * Operating point, runaway against allowable speed, safe pressure, as far as the design holds them
      * (found by key name ending, so they appear as the rules that make them are added).
      */
-    static List<HeadlineFigure> headlines(ResolvedDesign design) {
+    public static List<HeadlineFigure> headlines(ResolvedDesign design) {
         List<HeadlineFigure> out = new ArrayList<>();
         Optional<String> speed = shown(design, "performance.operating-speed");
         Optional<String> power = shown(design, "performance.operating-power");

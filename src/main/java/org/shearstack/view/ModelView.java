@@ -30,6 +30,9 @@ final class ModelView {
 
     private static final Rgb MARKER = Rgb.parse("#e0117f");
 
+    /** The window's spread slider goes to three times the producer's exploded offsets. */
+    static final double MAX_SPREAD = 3;
+
     private final ViewScene scene;
     private final double[] originMm;
     private final Map<String, PartNode> parts = new LinkedHashMap<>();
@@ -70,7 +73,7 @@ final class ModelView {
             placed.put(p.name(), m);
             all = all.union(Box3.of(m));
         }
-        ModelView view = new ModelView(scene, all.centre());
+        ModelView view = new ModelView(scene, medianCentre(placed.values()));
         for (ViewPart p : scene.parts()) {
             Mesh m = placed.get(p.name());
             FxMeshArrays arrays;
@@ -91,6 +94,27 @@ final class ModelView {
         }
         view.assemble(all);
         return view;
+    }
+
+    /**
+     * The origin for float coordinates: per axis, the median of the parts' box centres. One part far away
+     * (a file in the wrong unit) then fails with its own name instead of moving every other part out of range.
+     */
+    private static double[] medianCentre(java.util.Collection<Mesh> meshes) {
+        List<double[]> centres = new ArrayList<>();
+        for (Mesh m : meshes) {
+            Box3 b = Box3.of(m);
+            if (!b.isEmpty()) {
+                centres.add(b.centre());
+            }
+        }
+        double[] origin = new double[3];
+        for (int axis = 0; axis < 3 && !centres.isEmpty(); axis++) {
+            final int a = axis;
+            double[] values = centres.stream().mapToDouble(c -> c[a]).sorted().toArray();
+            origin[axis] = values[(values.length - 1) / 2];
+        }
+        return origin;
     }
 
     private void assemble(Box3 all) {
@@ -149,7 +173,7 @@ final class ModelView {
     }
 
     void setExplode(double fraction) {
-        explode = Math.max(0, Math.min(1, fraction));
+        explode = Math.max(0, Math.min(MAX_SPREAD, fraction));
         parts.values().forEach(p -> p.setExplode(explode));
         placeMarker();
     }

@@ -51,7 +51,7 @@ final class ViewerWindow {
     private final FlowPane headlines = new FlowPane(8, 6);
     private final VBox partRows = new VBox(4);
     private final ListView<Finding> findings = new ListView<>();
-    private final Slider spread = new Slider(0, 1, 0);
+    private final Slider spread = new Slider(0, ModelView.MAX_SPREAD, 0);
     private final CheckBox cut = new CheckBox("Cut through axis");
     private final Map<String, Boolean> visibility = new HashMap<>();
     private final Map<String, Rgb> colours = new HashMap<>();

@@ -62,4 +62,50 @@ class CalibrateCommandTest {
         assertEquals(log + ": expected at least 20 samples, found 2", r.err().strip());
         assertFalse(Files.exists(file));
     }
+
+    /**
+     * Back-test through the real design lookup: tests-fixtures/bench/classroom-run.csv was generated from the
+     * model of examples/classroom-demo.yaml with the coefficients on its "# truth:" line (ModelBenchRun; rerun it
+     * when the design's sizing changes). The calibration must recover them within 10 % and bring the predicted
+     * no-load speed within 5 % of the measured one. Self-consistency, not an outside reference.
+     */
+    @Test
+    void calibratesTheExampleDesignFromItsSyntheticRun(@TempDir Path dir) throws Exception {
+        Path log = Path.of("tests-fixtures", "bench", "classroom-run.csv");
+        String truthLine = Files.readAllLines(log).stream().filter(l -> l.startsWith("# truth:")).findFirst()
+                .orElseThrow();
+        java.util.Map<String, Double> truth = new java.util.HashMap<>();
+        for (String kv : truthLine.substring(8).trim().split(" ")) {
+            String[] p = kv.split("=");
+            try {
+                truth.put(p[0], Double.parseDouble(p[1]));
+            } catch (NumberFormatException e) {
+                // text values (name, admission)
+            }
+        }
+        Path file = dir.resolve("classroom-bench.yaml");
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        int code = Main.run(new String[] {"calibrate", "--design", "examples/classroom-demo.yaml", log.toString(),
+            "--inertia", String.valueOf(truth.get("inertia-kg-m2")), "-o", file.toString()},
+                new PrintWriter(out, true), new PrintWriter(err, true));
+        assertEquals(0, code, err.toString());
+        CalibrationFile.Contents c = CalibrationFile.read(file);
+        assertEquals(truth.get("windage-scale"), c.calibration().endFaceScale(), 0.10 * truth.get("windage-scale"));
+        assertEquals(truth.get("bearing-speed-factor"), c.calibration().bearingSpeedFactor(),
+                0.10 * truth.get("bearing-speed-factor"));
+        assertEquals(truth.get("discharge-scale"), c.calibration().dischargeScale(), 0.10 * truth.get("discharge-scale"));
+        assertEquals(AdmissionReading.JET_FRACTION_ONLY, c.calibration().admission());
+        String yaml = Files.readString(file);
+        double measured = value(yaml, "measured-no-load-speed");
+        double after = value(yaml, "predicted-no-load-speed-after");
+        assertEquals(measured, after, 0.05 * measured);
+        assertEquals(truth.get("no-load-rad-per-s"), after, 0.05 * truth.get("no-load-rad-per-s"));
+    }
+
+    private static double value(String yaml, String key) {
+        java.util.regex.Matcher m = java.util.regex.Pattern.compile(key + ": ([0-9.eE+-]+)").matcher(yaml);
+        assertTrue(m.find(), key);
+        return Double.parseDouble(m.group(1));
+    }
 }

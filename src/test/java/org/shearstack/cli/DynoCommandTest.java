@@ -62,6 +62,24 @@ class DynoCommandTest {
         assertTrue(r.out().contains("wrote "), r.out());
     }
 
+    /**
+     * Issue "done when": the example log against the demo design gives the page and the JSON, with the inertia
+     * from the kit's rotating parts and the design's performance model as the prediction.
+     */
+    @Test
+    void analysesTheExampleLogAgainstTheDemoDesign(@TempDir Path dir) throws Exception {
+        Run r = run(EXAMPLE.toString(), "--design", "examples/classroom-demo.yaml", "--extra-inertia", "25 g*cm^2",
+                "-o", dir.toString());
+        assertEquals(0, r.exit(), r.err());
+        JsonNode j = new ObjectMapper().readTree(dir.resolve("dyno.json").toFile());
+        assertTrue(j.get("inertiaSource").asText().startsWith("design classroom-demo: "), j.get("inertiaSource").asText());
+        assertTrue(j.get("inertiaSource").asText().endsWith(" + --extra-inertia 2.500e-06 kg*m^2"));
+        assertTrue(j.get("inertiaKgM2").asDouble() > 2.5e-6);
+        assertEquals("performance model of classroom-demo", j.at("/comparison/prediction").asText());
+        assertEquals("shaft", j.at("/comparison/measuredTorque").asText());
+        assertTrue(Files.readString(dir.resolve("dyno.html")).contains(">predicted<"));
+    }
+
     @Test
     void missingInertiaIsBadInput(@TempDir Path dir) {
         Run r = run(EXAMPLE.toString(), "-o", dir.toString());

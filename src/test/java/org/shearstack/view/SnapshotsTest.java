@@ -71,6 +71,23 @@ class SnapshotsTest {
                 "the uncut picture should not show the cut tint");
     }
 
+    @Test
+    void brokenPartsAreNamedOrSkipped() {
+        ViewPart box = ViewPart.of("box", SampleShapes.box(0, 0, 0, 10, 10, 10), Rgb.parse("#2f6db5"),
+                Placement.IDENTITY, OffsetMm.ZERO);
+        ViewPart empty = ViewPart.of("nothing", org.shearstack.geom.Mesh.of(new double[0], new int[0]),
+                Rgb.parse("#c8412f"), Placement.IDENTITY, OffsetMm.ZERO);
+        ImagePixels img = Snapshots.renderPixels(ViewScene.ofParts("with an empty part", java.util.List.of(box, empty)),
+                new SnapshotOptions(200, 150, true, true));
+        assertTrue(PixelStats.countHue(img, box.colour(), HUE_TOLERANCE_DEGREES) > 500, "the box is drawn");
+        ViewPart far = ViewPart.of("far", org.shearstack.geom.Mesh.of(new double[] {0, 0, 0, 1, 0, 0, 0, 1e12, 0},
+                new int[] {0, 1, 2}), Rgb.parse("#3f9e5a"), Placement.IDENTITY, OffsetMm.ZERO);
+        IllegalArgumentException e = org.junit.jupiter.api.Assertions.assertThrows(IllegalArgumentException.class,
+                () -> Snapshots.render(ViewScene.ofParts("too big", java.util.List.of(box, far)),
+                        new SnapshotOptions(200, 150, false, false)));
+        assertTrue(e.getMessage().startsWith("part 'far': vertex 2 coordinate y"), e.getMessage());
+    }
+
     /** Pixels within {@code tolerance} of the colour in each channel (brightness may vary with light). */
     private static int countNear(ImagePixels img, Rgb colour, int tolerance) {
         int n = 0;

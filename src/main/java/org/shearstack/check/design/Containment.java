@@ -31,7 +31,8 @@ public final class Containment implements Check {
         double grooveInner = v.optional("seal.groove-inner-diameter");
         double grooveWidth = v.optional("seal.groove-width");
         double boltCircle = v.need("housing.bolt-circle-diameter");
-        double seal = Double.isNaN(grooveInner) || Double.isNaN(grooveWidth) ? boltCircle : grooveInner + 2 * grooveWidth;
+        // no groove (a gasket or no seal: groove keys absent or 0): the pressure reaches the bolt circle
+        double seal = !(grooveInner > 0) || Double.isNaN(grooveWidth) ? boltCircle : grooveInner + 2 * grooveWidth;
         String size = v.needText("fasteners.size");
         double endPlay = v.optional("housing.end-play");
         double factor = v.optional("targets.safety-factor");

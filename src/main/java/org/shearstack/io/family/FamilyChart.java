@@ -126,7 +126,7 @@ public final class FamilyChart {
             for (Point p : ser.points()) {
                 String ppx = f(px(p.x(), xa, x0, x1));
                 if (Double.isFinite(p.y())) {
-                    b.append("<circle class=\"pt ").append(p.failed() ? "fail" : cls).append("\" cx=\"").append(ppx)
+                    b.append("<circle class=\"pt ").append(cls).append(p.failed() ? " fail" : "").append("\" cx=\"").append(ppx)
                             .append("\" cy=\"").append(f(px(p.y(), ya, y0, y1))).append("\" r=\"3.5\"><title>")
                             .append(Html.esc(p.label())).append("</title></circle>\n");
                 } else {

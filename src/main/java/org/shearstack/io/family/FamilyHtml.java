@@ -1,6 +1,5 @@
 package org.shearstack.io.family;
 
-import java.util.List;
 import java.util.Locale;
 
 /**
@@ -24,11 +23,10 @@ public final class FamilyHtml {
             svg.chart{border:1px solid #ddd;background:#fff}
             svg .title{font-size:13px;font-weight:bold}svg .tick{font-size:10px;fill:#333}svg .axis{font-size:11px}
             svg .frame{fill:none;stroke:#888}svg .grid{stroke:#eee}svg .ref{stroke:#c00;stroke-dasharray:5 3}
-            svg .ref-label{fill:#c00}svg .line{fill:none;stroke-width:1.5}svg .missing{fill:#c00;font-size:14px}
-            svg .pt.fail{fill:#d00;stroke:#600}
-            svg .s0{stroke:#1f77b4;fill:#1f77b4}svg .s1{stroke:#ff7f0e;fill:#ff7f0e}svg .s2{stroke:#2ca02c;fill:#2ca02c}
+            svg .ref-label{fill:#c00}svg polyline.line{fill:none;stroke-width:1.5}svg .missing{fill:#c00;font-size:14px}
+                        svg .s0{stroke:#1f77b4;fill:#1f77b4}svg .s1{stroke:#ff7f0e;fill:#ff7f0e}svg .s2{stroke:#2ca02c;fill:#2ca02c}
             svg .s3{stroke:#9467bd;fill:#9467bd}svg .s4{stroke:#8c564b;fill:#8c564b}svg .s5{stroke:#e377c2;fill:#e377c2}
-            svg .s6{stroke:#7f7f7f;fill:#7f7f7f}svg .s7{stroke:#17becf;fill:#17becf}svg circle.pt{stroke-width:1}
+            svg .s6{stroke:#7f7f7f;fill:#7f7f7f}svg .s7{stroke:#17becf;fill:#17becf}svg circle.pt{stroke-width:1}svg circle.pt.fail{stroke:#d00;stroke-width:2.5}
             """;
 
     private FamilyHtml() {
@@ -65,7 +63,7 @@ public final class FamilyHtml {
         for (FamilyChart.Spec c : FamilyPlots.of(t)) {
             b.append(FamilyChart.svg(c));
         }
-        b.append("</div>\n<p>Red points: variants whose checks failed. A red cross on the axis: a variant without"
+        b.append("</div>\n<p>Points ringed in red: variants whose checks failed. A red cross on the axis: a variant without"
                 + " that value (bad input, error, not run or not computed).</p>\n");
         b.append("<h2>Comparison</h2>\n");
         table(b, t);
@@ -172,16 +170,5 @@ public final class FamilyHtml {
     private static String fixed(double v, int decimals) {
         String s = String.format(Locale.ROOT, "%." + decimals + "f", v);
         return s.matches("-0(\\.0*)?") ? s.substring(1) : s;
-    }
-
-    /** The table's cells as shown (tests read them back). */
-    static List<String> shownFigures(FamilyRow r) {
-        double[] figs = r.figures();
-        java.util.ArrayList<String> out = new java.util.ArrayList<>();
-        for (int i = 0; i < figs.length; i++) {
-            FamilyColumns.Figure f = FamilyColumns.FIGURES.get(i);
-            out.add(format(figs[i], f.digits(), f.roundDown()));
-        }
-        return out;
     }
 }

@@ -66,13 +66,14 @@ public final class FamilyPlots {
         return out;
     }
 
+    /** The series a row belongs to: its values of the keys not on the x axis ("all variants" when none). */
     private static String others(FamilyTable t, FamilyRow r, int xKey) {
+        if (xKey < 0) {
+            return "all variants";
+        }
         StringBuilder b = new StringBuilder();
         for (int k = 0; k < t.keys().size(); k++) {
-            if (k != xKey || xKey < 0) {
-                if (xKey < 0) {
-                    continue;
-                }
+            if (k != xKey) {
                 b.append(b.length() == 0 ? "" : ", ").append(t.keys().get(k).key()).append('=')
                         .append(r.values().get(k).written());
             }

@@ -106,11 +106,13 @@ public final class StlReader {
         int state = 0; // 0 before solid, 1 in solid, 2 in facet, 3 in loop, 4 after endloop, 5 after endsolid
         int[] idx = new int[3];
         int k = 0;
+        int lastLine = 0;
         for (int ln = 0; ln < lines.length; ln++) {
             String line = lines[ln].trim();
             if (line.isEmpty()) {
                 continue;
             }
+            lastLine = ln + 1;
             String where = source + ": line " + (ln + 1) + ": ";
             String[] tok = line.split("\\s+");
             String kw = tok[0].toLowerCase(java.util.Locale.ROOT);
@@ -165,7 +167,9 @@ public final class StlReader {
             }
         }
         if (state != 5) {
-            throw new MeshFormatException(source + ": end of file: expected \"endsolid\" (file truncated?)");
+            throw new MeshFormatException(source + ": line " + lastLine + ": end of file" + (state > 1
+                    ? " inside a facet: expected the rest of the facet and \"endsolid\" " : ": expected \"endsolid\" ")
+                    + "(file truncated?)");
         }
         return builder.build();
     }

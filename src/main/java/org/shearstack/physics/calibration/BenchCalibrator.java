@@ -112,19 +112,24 @@ public final class BenchCalibrator {
             prior.bearingSpeedFactor(), prior.endFaceScale()};
         boolean[] use = {true, true, true};
         NonNegativeLeastSquares.Result r = null;
-        for (int pass = 0; pass < 3; pass++) {
+        for (int pass = 0; pass < 4; pass++) {
             r = fitSubset(basis, y, use, priorCoef);
             double[] rel = relativeStandardErrors(basis, y, use, r.coefficients(), priorCoef, loss.correlation);
-            boolean changed = false;
+            // drop the least determined term only, then refit: the others may become well determined without it
+            int worst = -1;
+            double worstScore = 0;
             for (int k = 0; k < 3; k++) {
-                if (use[k] && (maxShare(basis, r.coefficients(), k) < MIN_SHARE || rel[k] > MAX_RELATIVE_ERROR)) {
-                    use[k] = false;
-                    changed = true;
+                double share = maxShare(basis, r.coefficients(), k);
+                double score = share < MIN_SHARE ? Double.POSITIVE_INFINITY : rel[k] / MAX_RELATIVE_ERROR;
+                if (use[k] && score > 1 && score > worstScore) {
+                    worst = k;
+                    worstScore = score;
                 }
             }
-            if (!changed) {
+            if (worst < 0) {
                 break;
             }
+            use[worst] = false;
         }
         double[] c = r.coefficients();
         String[] keys = {sealed ? "seal-torque-per-bearing-nm" : "bearing-friction-coefficient", "bearing-speed-factor",

@@ -28,9 +28,15 @@ public record PerformanceCurve(Calibration calibration, List<OperatingPoint> poi
         return best;
     }
 
-    /** Fraction of the points outside the model's validity range. */
+    /** Fraction of the points outside the model's validity range ({@link Validity#inRange()}). */
     public double fractionOutOfRange() {
         long out = points.stream().filter(p -> !p.validity().inRange()).count();
+        return points.isEmpty() ? 0.0 : (double) out / points.size();
+    }
+
+    /** Fraction of the points whose gap flow is beyond the laminar limit (carried by the turbulent closure). */
+    public double fractionBeyondLaminar() {
+        long out = points.stream().filter(p -> !p.validity().laminar()).count();
         return points.isEmpty() ? 0.0 : (double) out / points.size();
     }
 }

@@ -17,6 +17,12 @@ public record Validity(double gapReynolds, double throughFlowReynolds, double re
     public static final double LAMINAR_REYNOLDS_LIMIT = 2000.0;
     /** Relative Mach number at which the gap entry becomes transonic and the 1-D gap model loses meaning. */
     public static final double RELATIVE_MACH_LIMIT = 1.0;
+    /**
+     * Upper end of the blended friction closure: Blasius's smooth-channel law f = 0.0791·Re^(−1/4) is fitted up to
+     * Re ≈ 10⁵ (from memory; Blasius 1913). Beyond the laminar limit the model runs on that closure, so a point is
+     * outside the model's validity only beyond this number, not beyond 2000 (physics.md §12.5).
+     */
+    public static final double BLENDED_REYNOLDS_LIMIT = 1.0e5;
 
     public static final Validity NO_FLOW = new Validity(0.0, 0.0, 0.0, true);
 
@@ -28,8 +34,18 @@ public record Validity(double gapReynolds, double throughFlowReynolds, double re
         return relativeMach < RELATIVE_MACH_LIMIT;
     }
 
-    /** True when every limit is kept. */
+    /**
+     * True when the point lies inside the range of the model as it runs (blended laminar–turbulent closure):
+     * Reynolds numbers up to {@link #BLENDED_REYNOLDS_LIMIT}, subsonic relative flow, a completed march.
+     * Turbulent gap flow alone is not outside it; {@link #laminar()} tells that apart.
+     */
     public boolean inRange() {
-        return laminar() && subsonicRelative() && marchCompleted;
+        return gapReynolds <= BLENDED_REYNOLDS_LIMIT && throughFlowReynolds <= BLENDED_REYNOLDS_LIMIT
+                && subsonicRelative() && marchCompleted;
+    }
+
+    /** True when the point also keeps the laminar limit the closed-form model was derived for. */
+    public boolean inLaminarRange() {
+        return laminar() && inRange();
     }
 }

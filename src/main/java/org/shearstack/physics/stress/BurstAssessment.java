@@ -22,6 +22,27 @@ public record BurstAssessment(double burstSpeedRadPerS, double allowableSpeedRad
                 strengthPa, factor);
     }
 
+    /**
+     * The allowable speed of a part: its peak-stress burst speed at the design strength, divided by the safety
+     * factor on speed (√ of the factor on stress). The one computation the burst checks and the sizing rules share.
+     */
+    public static double allowableSpeedRadPerS(SpinningAnnulus part, double densityKgPerM3, double poisson,
+            double strengthPa, SafetyFactor factor) {
+        return factor.allowableSpeedRadPerS(part.burstSpeedRadPerS(strengthPa, densityKgPerM3, poisson));
+    }
+
+    /**
+     * Allowable rim speed (m/s) of a printed disc with exhaust ports out to {@code portRingRatio} × its radius:
+     * design strength {@link PrintedStrength#inPlanePa}, the port allowance of
+     * {@link SpinningAnnulus#withExhaustPorts}, the safety factor on stress. Independent of the diameter because
+     * σ ∝ ρv² (physics.md §4.2).
+     */
+    public static double allowableRimSpeedOfPortedDiscMPerS(double portRingRatio, double densityKgPerM3,
+            double poisson, double tensileXyPa, SafetyFactor factor) {
+        SpinningAnnulus unit = SpinningAnnulus.withExhaustPorts(1.0, portRingRatio);
+        return allowableSpeedRadPerS(unit, densityKgPerM3, poisson, PrintedStrength.inPlanePa(tensileXyPa), factor);
+    }
+
     /** Achieved factor on stress: strength / stress at the reachable speed (infinite at rest). */
     public double stressFactor() {
         return stressAtReachablePa == 0 ? Double.POSITIVE_INFINITY : strengthPa / stressAtReachablePa;

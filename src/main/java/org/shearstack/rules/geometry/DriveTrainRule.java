@@ -29,7 +29,8 @@ public final class DriveTrainRule extends GeoRule {
                 List.of(COUPLING_DIAMETER, COUPLING_HUB_THICKNESS, COUPLING_TONGUE_HEIGHT, COUPLING_TONGUE_WIDTH,
                         COUPLING_DISC_THICKNESS, COUPLING_TURBINE_BORE, COUPLING_GENERATOR_BORE, COUPLING_CLEARANCE,
                         BRACKET_STANDOFF, BRACKET_SEAT_DIAMETER, BRACKET_WALL, BRACKET_PLATE, BRACKET_CUP_HEIGHT,
-                        BRACKET_SCREW_HOLE, BRACKET_CENTRE_HOLE, BRACKET_SCREW_LENGTH, TARGET_DIAMETER,
+                        BRACKET_SCREW_HOLE, BRACKET_CENTRE_HOLE, BRACKET_SCREW_LENGTH, BRACKET_COUNTERSINK,
+                        COUPLING_GENERATOR_HUB_DIAMETER, TARGET_DIAMETER,
                         TARGET_THICKNESS, STUB_LENGTH, DRIVE_LENGTH));
         this.table = table;
     }
@@ -54,7 +55,8 @@ public final class DriveTrainRule extends GeoRule {
             for (var k : List.of(COUPLING_DIAMETER, COUPLING_HUB_THICKNESS, COUPLING_TONGUE_HEIGHT,
                     COUPLING_TONGUE_WIDTH, COUPLING_DISC_THICKNESS, COUPLING_TURBINE_BORE, COUPLING_GENERATOR_BORE,
                     COUPLING_CLEARANCE, BRACKET_STANDOFF, BRACKET_SEAT_DIAMETER, BRACKET_WALL, BRACKET_PLATE,
-                    BRACKET_CUP_HEIGHT, BRACKET_SCREW_HOLE, BRACKET_CENTRE_HOLE, BRACKET_SCREW_LENGTH)) {
+                    BRACKET_CUP_HEIGHT, BRACKET_SCREW_HOLE, BRACKET_CENTRE_HOLE, BRACKET_SCREW_LENGTH, BRACKET_COUNTERSINK,
+                    COUPLING_GENERATOR_HUB_DIAMETER)) {
                 out.put(k, 0, none, "spec");
             }
             out.put(DRIVE_LENGTH, Quanta.up(2 * d, layer), "2 × journal: a bare drive stub", PRACTICE);
@@ -93,13 +95,30 @@ public final class DriveTrainRule extends GeoRule {
         out.put(BRACKET_PLATE, plate, "3 mm in whole layers (also the flange)", PRACTICE);
         out.put(BRACKET_CUP_HEIGHT, Quanta.up(0.4 * in.get(GENERATOR_BODY_LENGTH), layer),
                 "40 % of the motor body length in whole layers", PRACTICE);
-        out.put(BRACKET_SCREW_LENGTH, FastenerRule.standardLengthAtMost(table, plate + 2 * screw.nominalMm()),
-                "longest standard length ≤ plate + 2 × screw diameter (thread into the motor face)",
-                table.lengthsSource() + "; " + PRACTICE);
         out.put(BRACKET_SCREW_HOLE, screwHole, "ISO 273 medium clearance of the motor screws + hole compensation",
                 "ISO 273 (standards.md §3.1)");
-        double centre = Math.min(Math.max(genShaft + 3, 0.25 * body), spacing - screwHole - 2 * bracketWall) + hc;
-        out.put(BRACKET_CENTRE_HOLE, Math.max(centre, genShaft + hc + 1.0),
+        double centre = Math.max(Math.min(Math.max(genShaft + 3, 0.25 * body), spacing - screwHole - 2 * bracketWall) + hc,
+                genShaft + hc + 1.0);
+        out.put(BRACKET_CENTRE_HOLE, centre,
                 "max(motor shaft + 3 mm, 25 % of body) within the screw spacing, + hole compensation", PRACTICE);
+        // The plate's underside is a 45° cone down to the centre hole (the bracket prints flange down, so the
+        // plate would otherwise bridge the stand-off tube). The motor screws come up through the cone with
+        // countersunk heads in 45° seats, and the generator's coupling hub turns inside those heads.
+        double sink = COUNTERSUNK_HEAD_PER_DIAMETER * screw.nominalMm() + hc;
+        out.put(BRACKET_COUNTERSINK, sink, "2 × screw diameter (countersunk head, 90°) + hole compensation",
+                "from memory: ISO 7046-1 / ISO 10642 countersunk heads are about twice the thread diameter");
+        double coneEnd = centre / 2 + layer;
+        double headTop = Math.max(spacing / 2 + sink / 2 - coneEnd, (sink - screwHole) / 2 + layer);
+        out.put(BRACKET_SCREW_LENGTH, FastenerRule.standardLengthAtMost(table, headTop + plate + 2 * screw.nominalMm()),
+                "longest standard length ≤ countersink depth below the plate + plate + 2 × screw diameter",
+                table.lengthsSource() + "; " + PRACTICE);
+        double hubMax = Math.min(spacing / 2 - sink / 2 - AXIAL_GAP_MM, coneEnd);
+        double hubDia = Math.min(od, Math.max(2 * hubMax, genShaft + hc + 4 * lw));
+        out.put(COUPLING_GENERATOR_HUB_DIAMETER, hubDia,
+                "2 × min(screw circle radius − countersink radius − 0.5 mm, cone end), at least bore + 4 lines",
+                "geometry; " + PRACTICE);
     }
+
+    /** Countersunk head diameter per thread diameter (from memory: ISO 7046-1, ISO 10642, about 2). */
+    static final double COUNTERSUNK_HEAD_PER_DIAMETER = 2.0;
 }

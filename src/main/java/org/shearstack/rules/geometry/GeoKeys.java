@@ -178,6 +178,10 @@ public final class GeoKeys {
     public static final Key BRACKET_SCREW_HOLE = len("bracket.screw-hole-diameter");
     public static final Key BRACKET_CENTRE_HOLE = len("bracket.centre-hole-diameter");
     public static final Key BRACKET_SCREW_LENGTH = len("bracket.motor-screw-length");
+    /** Countersink of the motor screws, entered from the coupling side (their heads sit in the plate's cone). */
+    public static final Key BRACKET_COUNTERSINK = len("bracket.countersink-diameter");
+    /** The generator's coupling hub: small enough to turn inside the motor screws' heads. */
+    public static final Key COUPLING_GENERATOR_HUB_DIAMETER = len("coupling.generator-hub-diameter");
     public static final Key TARGET_DIAMETER = len("target.outside-diameter");
     public static final Key TARGET_THICKNESS = len("target.thickness");
 }

@@ -29,9 +29,9 @@ public final class HousingLayoutRule extends GeoRule {
     private final SealTable seals;
 
     public HousingLayoutRule(FastenerTable fasteners, SealTable seals) {
-        super("GEO-HOUSING-LAYOUT", List.of(CHAMBER_DIAMETER, PORT_FEED_DIAMETER, PORT_PILOT_DIAMETER, LINE_WIDTH,
-                        SEAL, SEAL_SIZE, BOLT_CLEARANCE, BOLT_HEAD_DIAMETER, BOLT_ANCHOR_HOLE, BOLT_NUT_ACROSS_FLATS,
-                        FASTENER_SIZE),
+        super("GEO-HOUSING-LAYOUT", BoltCount.withLoadKeys(List.of(CHAMBER_DIAMETER, PORT_FEED_DIAMETER,
+                        PORT_PILOT_DIAMETER, LINE_WIDTH, SEAL, SEAL_SIZE, BOLT_CLEARANCE, BOLT_HEAD_DIAMETER,
+                        BOLT_ANCHOR_HOLE, BOLT_NUT_ACROSS_FLATS, FASTENER_SIZE)),
                 List.of(WALL, PLENUM_DIAMETER, PLENUM_RADIUS, SEAL_KIND, GROOVE_DEPTH, GROOVE_WIDTH,
                         GROOVE_INNER_DIAMETER, ORING_INNER_DIAMETER, CORD_LENGTH, ORING_DESIGNATION,
                         ORING_CROSS_SECTION, BOLT_CIRCLE, BOLT_COUNT, HOUSING_OUTSIDE));
@@ -91,14 +91,14 @@ public final class HousingLayoutRule extends GeoRule {
         Fastener f = FastenerRule.fastener(fasteners, in);
         double holeR = Math.max(in.get(BOLT_CLEARANCE), in.get(BOLT_ANCHOR_HOLE)) / 2;
         double nutR = in.get(BOLT_NUT_ACROSS_FLATS) / Math.sqrt(3);
-        double rb = Quanta.upToMultiple(outerOfSeal + wall + Math.max(holeR, nutR), 0.1);
-        out.put(BOLT_CIRCLE, 2 * rb, "2 × (seal outer edge + wall + largest hole or nut radius), up to 0.2 mm",
-                "geometry; " + PRINT_RULES);
-        int count = (int) Math.ceil(2 * Math.PI * rb / (MAX_PITCH_DIAMETERS * f.nominalMm()));
-        count = Math.max(4, count + (count % 2));
-        out.put(BOLT_COUNT, count, "bolt circle circumference / (10 × screw diameter), at least 4, even",
-                "from memory: flange bolt pitch within about 10 bolt diameters");
         double boss = Math.max(Math.max(in.get(BOLT_HEAD_DIAMETER) / 2 + lw, holeR + wall), nutR + wall);
+        double rb = Quanta.upToMultiple(outerOfSeal + wall + Math.max(holeR, nutR), 0.1);
+        // pressure acts out to an O-ring's groove; with a gasket or no seal, out to the bolt circle
+        BoltCount bolts = BoltCount.of(in, f, rb, boss, seal.startsWith("o-ring") ? 2 * outerOfSeal : Double.NaN,
+                MAX_PITCH_DIAMETERS);
+        out.put(BOLT_CIRCLE, 2 * bolts.radiusMm(), bolts.circleFormula(), "geometry; " + PRINT_RULES);
+        rb = bolts.radiusMm();
+        out.put(BOLT_COUNT, bolts.count(), bolts.countFormula(), bolts.countSource());
         double outside = Math.max(2 * (rb + boss), 2 * (rp + in.get(PORT_PILOT_DIAMETER) / 2 + wall));
         out.put(HOUSING_OUTSIDE, Quanta.upToMultiple(outside, 0.5),
                 "2 × (bolt circle radius + max(head radius + line width, hole or nut radius + wall)), up to 0.5 mm",

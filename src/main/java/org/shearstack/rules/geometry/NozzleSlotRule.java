@@ -30,8 +30,8 @@ public final class NozzleSlotRule extends GeoRule {
         double throat = in.get(NOZZLE_THROAT_AREA) / h;
         out.put(NOZZLE_HEIGHT, h, "the disc-pack height: the jet covers every disc and gap", "geometry");
         out.put(NOZZLE_THROAT_WIDTH, throat, "throat area / slot height", "geometry");
-        boolean cd = in.has(NOZZLE_KIND) && in.text(NOZZLE_KIND).trim().equals("converging-diverging")
-                && in.has(NOZZLE_EXIT_AREA);
+        // converging–diverging whenever the flow sizing (SIZE-NOZZLE-EXIT) asks for an exit larger than the throat
+        boolean cd = in.has(NOZZLE_EXIT_AREA) && in.get(NOZZLE_EXIT_AREA) > in.get(NOZZLE_THROAT_AREA) * (1 + 1e-9);
         if (cd) {
             out.put(NOZZLE_EXIT_WIDTH, Math.max(throat, in.get(NOZZLE_EXIT_AREA) / h), "exit area / slot height",
                     "geometry (exit area from the flow sizing)");

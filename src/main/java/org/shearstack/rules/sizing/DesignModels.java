@@ -37,6 +37,7 @@ public final class DesignModels {
                 GeoKeys.RADIAL_CLEARANCE, GeoKeys.DISC_EXHAUST_AREA, GeoKeys.BEARING_BORE, GeoKeys.BEARING_OUTSIDE,
                 GeoKeys.BEARING_DESIGNATION, ProfileKeys.DENSITY, ProfileKeys.NOZZLE_DIAMETER,
                 ProfileKeys.LINE_WIDTH));
+        keys.addAll(SpecCalibration.KEYS);
         READS = List.copyOf(keys);
     }
 
@@ -48,9 +49,13 @@ public final class DesignModels {
     private DesignModels() {
     }
 
-    /** The model of a resolved design with the nominal calibration. */
+    /**
+     * The model of a resolved design with its calibration: the one fitted to bench runs when the spec names a
+     * calibration file ({@code calibration: FILE.yaml}), else the nominal one.
+     */
     public static TurbineModel turbineModel(ResolvedDesign design) {
-        return turbineModel(Values.of(design), Calibration.nominal());
+        Values v = Values.of(design);
+        return turbineModel(v, SpecCalibration.calibration(v));
     }
 
     /** The model of a resolved design with a given calibration (for example one fitted from bench data). */

@@ -17,8 +17,13 @@ import org.shearstack.physics.rotor.Calibration;
 import org.shearstack.physics.rotor.OperatingPoint;
 import org.shearstack.physics.rotor.PerformanceCurve;
 import org.shearstack.physics.rotor.TurbineModel;
+import org.shearstack.physics.rotor.Validity;
 import org.shearstack.rules.InputRejectedException;
+import org.shearstack.physics.stress.BurstAssessment;
+import org.shearstack.physics.stress.SafetyFactor;
 import org.shearstack.rules.Key;
+import org.shearstack.rules.ProfileKeys;
+import org.shearstack.rules.geometry.GeoKeys;
 import org.shearstack.rules.Rule;
 import org.shearstack.rules.RuleInputs;
 import org.shearstack.rules.RuleOutputs;
@@ -46,7 +51,9 @@ final class PerformanceRule implements Rule {
     @Override
     public List<Key> reads() {
         List<Key> keys = new ArrayList<>(DesignModels.READS);
-        keys.addAll(List.of(TARGETS_SPEED, TARGETS_OBJECTIVE, SizingKeys.ROTOR_TIP_SPEED, GENERATOR_OPEN_CIRCUIT_VOLTAGE,
+        keys.addAll(List.of(TARGETS_SPEED, TARGETS_OBJECTIVE, SizingKeys.ROTOR_TIP_SPEED, SizingKeys.ROTOR_TIP_SPEED_LIMIT,
+                ProfileKeys.POISSON_RATIO, ProfileKeys.TENSILE_STRENGTH_XY, SpecKeys.TARGETS_SAFETY_FACTOR,
+                GeoKeys.PORT_CIRCLE_DIAMETER, GeoKeys.PORT_DIAMETER, GENERATOR_OPEN_CIRCUIT_VOLTAGE,
                 GENERATOR_OPEN_CIRCUIT_VOLTAGE_SPEED, GENERATOR_WINDING_RESISTANCE, GENERATOR_LOAD));
         return keys;
     }
@@ -71,25 +78,32 @@ final class PerformanceRule implements Rule {
             throw new InputRejectedException(SpecKeys.ROTOR_DISCS, "at least 2 discs",
                     QuantityFormat.format(in.get(SpecKeys.ROTOR_DISCS), Dimension.COUNT));
         }
-        TurbineModel model = DesignModels.turbineModel(v, Calibration.nominal());
+        TurbineModel model = DesignModels.turbineModel(v, SpecCalibration.calibration(v));
+        String calibration = SpecCalibration.words(v);
         PerformanceCurve curve = model.curve(CURVE_POINTS);
         double runaway = curve.runawaySpeedRadPerS();
         double optimistic = model.withCalibration(model.calibration().optimistic()).runawaySpeedRadPerS();
         double pessimistic = model.withCalibration(model.calibration().pessimistic()).runawaySpeedRadPerS();
         double upper = Math.max(runaway, Math.max(optimistic, pessimistic));
         out.put(SizingKeys.RUNAWAY_SPEED, runaway, "speed where the shaft torque of the coupled model falls to zero"
-                + " (nominal calibration, parasitic drag of end faces, rims and bearings included)", SOURCE);
+                + " (" + calibration + "; parasitic drag of end faces, rims and bearings included)", source(v));
         out.put(SizingKeys.RUNAWAY_UPPER_BOUND, upper, String.format(Locale.ROOT,
                 "highest runaway of the uncertainty band: optimistic %.0f, estimate %.0f, pessimistic %.0f rpm;"
-                        + " losses never set to zero (physics.md §12.8)", rpm(optimistic), rpm(runaway),
-                rpm(pessimistic)), SOURCE);
-        out.put(SizingKeys.STALL_TORQUE, curve.stallTorqueNm(), "shaft torque at zero speed", SOURCE);
+                        + " losses never set to zero (physics.md §12.8); band around the %s", rpm(optimistic),
+                rpm(runaway), rpm(pessimistic), calibration), source(v));
+        out.put(SizingKeys.STALL_TORQUE, curve.stallTorqueNm(), "shaft torque at zero speed (" + calibration + ")",
+                source(v));
         out.put(SizingKeys.ADMISSION_FRACTION, model.geometry().admissionFraction(),
                 "φ = N_g b/(N_g b + N_d t): the part of the slot jet that faces gaps", "physics.md §1.5 (derived)");
         out.put(SizingKeys.OUT_OF_RANGE_FRACTION, curve.fractionOutOfRange(), String.format(Locale.ROOT,
-                "fraction of %d map points with gap Reynolds number above 2000 or relative Mach number above 1"
-                        + " (the blended friction closure carries them)", CURVE_POINTS), SOURCE);
+                "fraction of %d map points outside the model's range: gap Reynolds number above %.0f (end of the"
+                        + " blended laminar–Blasius friction closure), relative Mach number above 1, or a failed gap"
+                        + " march; %.0f %% of the points have turbulent gap flow (Reynolds number above %.0f), which"
+                        + " the blended closure carries, so they are not counted as outside", CURVE_POINTS,
+                Validity.BLENDED_REYNOLDS_LIMIT, 100 * curve.fractionBeyondLaminar(), Validity.LAMINAR_REYNOLDS_LIMIT),
+                "physics.md §3.4, §12.5; Blasius 1913 and Churchill & Usagi 1972 (from memory); derived");
 
+        double allowable = allowableSpeedRadPerS(in);
         OperatingPoint p;
         String how;
         double electrical = 0.0;
@@ -112,23 +126,52 @@ final class PerformanceRule implements Rule {
             how = "at the target speed";
         } else {
             Objective objective = Objective.parse(in.text(TARGETS_OBJECTIVE));
-            double top = Math.min(runaway, in.get(SizingKeys.ROTOR_TIP_SPEED) / model.geometry().outerRadiusM());
+            double top = Math.min(Math.min(runaway, allowable),
+                    in.get(SizingKeys.ROTOR_TIP_SPEED) / model.geometry().outerRadiusM());
             double w = top > 0 ? GoldenSection.maximize(s -> objective.of(model.at(s)), 0, top, 1e-3 * top) : 0.0;
             p = model.at(w);
             how = "at the best " + (objective == Objective.POWER ? "power" : "efficiency")
                     + " with the rim no faster than the design rim speed";
         }
-        out.put(SizingKeys.OPERATING_SPEED, p.speedRadPerS(), "operating speed " + how, SOURCE);
-        out.put(SizingKeys.OPERATING_POWER, p.shaftPowerW(), "shaft power " + how, SOURCE);
+        how += p.speedRadPerS() <= allowable * (1 + 1e-9)
+                ? String.format(Locale.ROOT, "; at or below the allowable %.0f rpm of the ported disc (BURST check's"
+                        + " computation)", rpm(allowable))
+                : String.format(Locale.ROOT, "; ABOVE the allowable %.0f rpm of the ported disc: the design speed must"
+                        + " not exceed it (see BURST-RUNAWAY for the remedies)", rpm(allowable));
+        how += " (" + calibration + ")";
+        String source = source(v);
+        out.put(SizingKeys.OPERATING_SPEED, p.speedRadPerS(), "operating speed " + how, source);
+        out.put(SizingKeys.OPERATING_POWER, p.shaftPowerW(), "shaft power " + how, source);
         out.put(SizingKeys.OPERATING_EFFICIENCY, p.efficiency(),
-                "shaft power / isentropic power of the air from supply pressure to ambient, " + how, SOURCE);
-        out.put(SizingKeys.PERFORMANCE_MASS_FLOW, p.massFlowKgPerS(), "mass flow " + how, SOURCE);
+                "shaft power / isentropic power of the air from supply pressure to ambient, " + how, source);
+        out.put(SizingKeys.PERFORMANCE_MASS_FLOW, p.massFlowKgPerS(), "mass flow " + how, source);
         out.put(SizingKeys.SUPPLY_PLENUM_PRESSURE, p.plenumPressurePa(),
-                "plenum pressure where the supply path's ISO 6358 flow equals the nozzle's, " + how, SOURCE);
+                "plenum pressure where the supply path's ISO 6358 flow equals the nozzle's, " + how, source);
         out.put(SizingKeys.EXIT_SWIRL_LOSS, p.exitSwirlLossW(),
                 "kinetic energy of the swirl leaving the gaps, ṁ·½(Ωr₁ + κW₁)², lost without a de-swirler, " + how,
                 "physics.md §3.7 and §12.4 (derived)");
         out.put(SizingKeys.ELECTRICAL_POWER, electrical, electricalHow, "physics.md §8.3 (DC machine, derived)");
+    }
+
+    /**
+     * Allowable speed of the disc as built: ported out to the port ring's outer edge (the kit's port circle plus
+     * one port diameter, else the exhaust diameter, as the BURST check reads it), with the burst checks'
+     * computation ({@link BurstAssessment#allowableRimSpeedOfPortedDiscMPerS}).
+     */
+    static double allowableSpeedRadPerS(RuleInputs in) {
+        double d = in.get(SpecKeys.ROTOR_DIAMETER);
+        double ring = in.has(GeoKeys.PORT_CIRCLE_DIAMETER) && in.has(GeoKeys.PORT_DIAMETER)
+                ? in.get(GeoKeys.PORT_CIRCLE_DIAMETER) + in.get(GeoKeys.PORT_DIAMETER)
+                : in.get(SpecKeys.ROTOR_EXHAUST_DIAMETER);
+        double ratio = Math.min(0.95, ring / d);
+        SafetyFactor factor = new SafetyFactor(Math.max(SafetyFactor.MIN, in.get(SpecKeys.TARGETS_SAFETY_FACTOR)));
+        return BurstAssessment.allowableRimSpeedOfPortedDiscMPerS(ratio, in.get(ProfileKeys.DENSITY),
+                in.get(ProfileKeys.POISSON_RATIO), in.get(ProfileKeys.TENSILE_STRENGTH_XY), factor) / (d / 2000.0);
+    }
+
+    private static String source(Values v) {
+        return SpecCalibration.calibrated(v) ? SOURCE + "; CALIBRATED: loss coefficients fitted to the user's bench"
+                + " runs (spec key calibration)" : SOURCE;
     }
 
     private static double rpm(double radPerS) {

@@ -22,6 +22,10 @@ import org.shearstack.rules.ProfileKeys;
 import org.shearstack.rules.Rule;
 import org.shearstack.rules.RuleInputs;
 import org.shearstack.rules.RuleOutputs;
+import org.shearstack.physics.stress.BurstAssessment;
+import org.shearstack.physics.stress.PrintedStrength;
+import org.shearstack.physics.stress.SafetyFactor;
+import org.shearstack.physics.stress.SpinningAnnulus;
 import org.shearstack.rules.geometry.GeoKeys;
 
 /**
@@ -31,12 +35,15 @@ import org.shearstack.rules.geometry.GeoKeys;
  */
 final class RotorSizing {
 
-    /** Strength knock-down for printed discs (physics.md §4.3: lower XY bound × 0.7, engineering judgment). */
-    static final double PRINTED_STRENGTH_FACTOR = 0.7;
     /** Exhaust radius ratio used before the exhaust is sized (Krishnan et al. 2011: r₁/r₂ ≈ 0.47–0.51). */
     static final double FIRST_EXHAUST_RATIO = 0.45;
     /** Highest exhaust-port Mach number accepted (physics.md §3.7: below 0.3). */
     static final double MAX_PORT_MACH = 0.3;
+    /** Smallest and largest exhaust radius ratio r₁/r₂ SIZE-EXHAUST tries (Krishnan et al. 2011 used 0.47–0.51). */
+    static final double MIN_EXHAUST_RATIO = 0.30;
+    static final double MAX_EXHAUST_RATIO = 0.60;
+    /** Largest gap the optimiser tries, in Ekman thicknesses √(ν/Ω) (physics.md §3.8b: b/δ_E ≈ 2–4, from memory). */
+    static final double MAX_GAP_EKMAN_RATIO = 4.0;
 
     private RotorSizing() {
     }
@@ -47,6 +54,7 @@ final class RotorSizing {
         keys.addAll(List.of(NOZZLE_JET_ANGLE, ProfileKeys.NOZZLE_DIAMETER, ProfileKeys.LINE_WIDTH, TARGETS_OBJECTIVE,
                 TARGETS_SPEED, SizingKeys.ROTOR_TIP_SPEED, SizingKeys.NOZZLE_MASS_FLOW));
         keys.addAll(List.of(more));
+        keys.addAll(SpecCalibration.KEYS);
         return keys;
     }
 
@@ -70,7 +78,8 @@ final class RotorSizing {
                 FunctionRule.of("SIZE-DIAMETER", modelReads(ROTOR_DISC_THICKNESS, GeoKeys.GAP_PREFERRED,
                         ProfileKeys.BED_X, ProfileKeys.BED_Y, ProfileKeys.LAYER_HEIGHT), List.of(ROTOR_DIAMETER), RotorSizing::diameter),
                 FunctionRule.of("SIZE-GAP", modelReads(ROTOR_DIAMETER, ROTOR_DISC_THICKNESS, GeoKeys.GAP_MIN,
-                        GeoKeys.GAP_PREFERRED, ProfileKeys.LAYER_HEIGHT), List.of(ROTOR_GAP), RotorSizing::gap),
+                        GeoKeys.GAP_PREFERRED, ProfileKeys.LAYER_HEIGHT),
+                        List.of(ROTOR_GAP, SizingKeys.GAP_AT_SEARCH_BOUND), RotorSizing::gap),
                 FunctionRule.of("SIZE-DISCS", modelReads(ROTOR_DIAMETER, ROTOR_DISC_THICKNESS, ROTOR_GAP),
                         List.of(ROTOR_DISCS), RotorSizing::discs),
                 FunctionRule.of("SIZE-EXHAUST", modelReads(ROTOR_DIAMETER, ROTOR_DISC_THICKNESS, ROTOR_GAP,
@@ -78,13 +87,27 @@ final class RotorSizing {
     }
 
     private static void tipLimit(RuleInputs in, RuleOutputs out) {
-        double s = PRINTED_STRENGTH_FACTOR * in.get(ProfileKeys.TENSILE_STRENGTH_XY) / in.get(TARGETS_SAFETY_FACTOR);
-        double nu = in.get(ProfileKeys.POISSON_RATIO);
-        double v = Math.sqrt(4.0 * s / ((3.0 + nu) * in.get(ProfileKeys.DENSITY)));
-        out.put(SizingKeys.ROTOR_TIP_SPEED_LIMIT, v,
-                "√(4 S/((3+ν) ρ)) for a disc with a small central hole, S = 0.7 × XY strength / safety factor on"
-                        + " stress",
-                "Timoshenko & Goodier §32, holed rotating disc (physics.md §4.1–§4.3)");
+        double f = in.get(TARGETS_SAFETY_FACTOR);
+        SafetyFactor factor;
+        try {
+            factor = new SafetyFactor(f);
+        } catch (IllegalArgumentException e) {
+            throw new InputRejectedException(TARGETS_SAFETY_FACTOR, "a safety factor on stress between "
+                    + SafetyFactor.MIN + " and " + SafetyFactor.MAX, String.format(Locale.ROOT, "%.3g", f));
+        }
+        double xy = in.get(ProfileKeys.TENSILE_STRENGTH_XY);
+        double v = BurstAssessment.allowableRimSpeedOfPortedDiscMPerS(MAX_EXHAUST_RATIO, in.get(ProfileKeys.DENSITY),
+                in.get(ProfileKeys.POISSON_RATIO), xy, factor);
+        out.put(SizingKeys.ROTOR_TIP_SPEED_LIMIT, v, String.format(Locale.ROOT,
+                "allowable rim speed of a disc ported out to r₁/r₂ = %.2f (the largest exhaust SIZE-EXHAUST may"
+                        + " choose, so the sized disc is allowed at least this): peak-stress burst speed of a holed"
+                        + " disc × port allowance %.1f at the design strength %.1f MPa (%.1f × printed-flat strength),"
+                        + " divided by √%.2g (factor on stress); the same computation as the BURST-RUNAWAY check. The"
+                        + " design and operating speeds are kept at or below it.",
+                MAX_EXHAUST_RATIO, SpinningAnnulus.EXHAUST_PORT_ALLOWANCE, PrintedStrength.inPlanePa(xy) / 1e6,
+                PrintedStrength.IN_PLANE_PRINT_FACTOR, factor.onStress()),
+                "Timoshenko & Goodier §32 holed rotating disc; physics.md §4.2–§4.3, §12.7 (BurstAssessment,"
+                        + " SpinningAnnulus, PrintedStrength, SafetyFactor)");
     }
 
     private static void tip(RuleInputs in, RuleOutputs out) {
@@ -103,11 +126,14 @@ final class RotorSizing {
                 : OptionalDouble.empty();
         return new SizingModel(FlowParts.supply(v), FlowParts.nozzle(v), in.get(NOZZLE_JET_ANGLE),
                 in.get(ProfileKeys.NOZZLE_DIAMETER), in.get(ProfileKeys.LINE_WIDTH),
-                Objective.parse(in.text(TARGETS_OBJECTIVE)), target, in.get(SizingKeys.ROTOR_TIP_SPEED));
+                Objective.parse(in.text(TARGETS_OBJECTIVE)), target, in.get(SizingKeys.ROTOR_TIP_SPEED),
+                SpecCalibration.calibration(v));
     }
 
     private static String objectiveWords(SizingModel m) {
-        String what = m.objective() == Objective.POWER ? "shaft power" : "efficiency";
+        String what = (m.objective() == Objective.POWER ? "shaft power" : "efficiency")
+                + (m.calibration().name().equals("calibrated") ? " (model with the CALIBRATED coefficients of the"
+                        + " spec's calibration file)" : "");
         return m.targetSpeed().isPresent()
                 ? what + String.format(Locale.ROOT, " at the target speed %.0f rpm", m.targetSpeed().getAsDouble() * 30
                 / Math.PI)
@@ -155,13 +181,18 @@ final class RotorSizing {
         double speed = m.targetSpeed().orElse(in.get(SizingKeys.ROTOR_TIP_SPEED) * 2000.0 / d);
         double ekman = SizingModel.ekmanMm(speed);
         double flow = in.get(SizingKeys.NOZZLE_MASS_FLOW);
-        double hi = Math.max(2.0 * printerLimit(in, GeoKeys.GAP_PREFERRED, 1.875, 1), 2.0 * 2.0 * ekman);
+        double preferred = printerLimit(in, GeoKeys.GAP_PREFERRED, 1.875, 1);
+        // Upper bound: the larger of the printer's preferred gap (common practice: ~0.75 mm gaps on a 0.4 mm
+        // nozzle) and b/δ_E = 4 (physics.md §3.8b, from memory), raised to whole layers. Beyond it the model's
+        // score keeps rising only through the admission fraction φ = N_g b/(N_g b + N_d t), while the gap flow no
+        // longer couples to the discs (b ≫ δ_E) and runs far outside the laminar range.
+        double hi = Math.max(gMin, Math.ceil(Math.max(preferred, MAX_GAP_EKMAN_RATIO * ekman) / layer - 1e-9) * layer);
         TreeSet<Double> candidates = new TreeSet<>();
         int steps = 8;
         for (int i = 0; i <= steps; i++) {
-            candidates.add(Math.max(gMin, Math.round((gMin + (hi - gMin) * i / steps) / layer) * layer));
+            candidates.add(Math.min(hi, Math.max(gMin, Math.round((gMin + (hi - gMin) * i / steps) / layer) * layer)));
         }
-        candidates.add(Math.max(gMin, Math.round(2.0 * ekman / layer) * layer));
+        candidates.add(Math.min(hi, Math.max(gMin, Math.round(2.0 * ekman / layer) * layer)));
         double best = gMin;
         double bestValue = Double.NEGATIVE_INFINITY;
         for (double g : candidates) {
@@ -173,12 +204,20 @@ final class RotorSizing {
                 best = g;
             }
         }
+        boolean atBound = best >= hi - 1e-9 && hi > gMin;
+        out.put(SizingKeys.GAP_AT_SEARCH_BOUND, atBound ? 1.0 : 0.0, atBound
+                ? "1: the model's best gap is the upper end of the search range (see rotor.gap)"
+                : "0: the model's best gap lies inside the search range", "SIZE-GAP");
         out.put(ROTOR_GAP, best, String.format(Locale.ROOT,
                 "start from the boundary-layer scale 2√(ν/Ω) = %.3f mm at %.0f rpm; model evaluated at %d gaps from the"
-                        + " printer's minimum %.2f mm to %.2f mm in whole layers (disc count from the flow per gap);"
-                        + " best %s", 2 * ekman, speed * 30 / Math.PI, candidates.size(), gMin, hi, objectiveWords(m)),
-                "Ekman thickness (physics.md §3.4) and the coupled flow model (derived); printer minimum from"
-                        + " GEO-DISC-LIMITS");
+                        + " printer's minimum %.2f mm to %.2f mm in whole layers (the larger of the printer's preferred"
+                        + " gap %.2f mm and 4 Ekman thicknesses %.3f mm; disc count from the flow per gap); best %s%s",
+                2 * ekman, speed * 30 / Math.PI, candidates.size(), gMin, hi, preferred, MAX_GAP_EKMAN_RATIO * ekman,
+                objectiveWords(m), atBound ? "; AT THE SEARCH BOUND: the model's score still rises with the gap"
+                        + " because the admission fraction φ = N_g b/(N_g b + N_d t) grows, so the bound, not the"
+                        + " model, sets this gap" : ""),
+                "Ekman thickness (physics.md §3.4, §3.8b b/δ_E ≈ 2–4 from memory) and the coupled flow model"
+                        + " (derived); printer minimum and preferred gap from GEO-DISC-LIMITS (common practice)");
     }
 
     private static void discs(RuleInputs in, RuleOutputs out) {
@@ -230,7 +269,7 @@ final class RotorSizing {
                 (int) Math.round(in.get(ROTOR_DISCS)));
         double best = FIRST_EXHAUST_RATIO;
         double bestValue = Double.NEGATIVE_INFINITY;
-        for (double ratio = 0.30; ratio <= 0.6001; ratio += 0.05) {
+        for (double ratio = MIN_EXHAUST_RATIO; ratio <= MAX_EXHAUST_RATIO + 1e-4; ratio += 0.05) {
             SizingModel.Score s = m.score(base.withExhaustDiameter(ratio * d));
             if (s.point().exhaustMach() <= MAX_PORT_MACH && s.value() > bestValue) {
                 bestValue = s.value();

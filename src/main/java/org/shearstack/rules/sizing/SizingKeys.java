@@ -49,6 +49,8 @@ public final class SizingKeys {
     public static final Key ELECTRICAL_POWER = Key.of("performance.electrical-power", POWER);
     public static final Key ADMISSION_FRACTION = Key.of("performance.admission-fraction", DIMENSIONLESS);
     public static final Key OUT_OF_RANGE_FRACTION = Key.of("performance.out-of-range-fraction", DIMENSIONLESS);
+    /** 1 when SIZE-GAP's best gap is the upper end of its search range (a CAUTION), else 0. */
+    public static final Key GAP_AT_SEARCH_BOUND = Key.of("rotor.gap-at-search-bound", DIMENSIONLESS);
     public static final Key EXIT_SWIRL_LOSS = Key.of("performance.exit-swirl-loss", POWER);
 
     private SizingKeys() {

@@ -26,9 +26,10 @@ import org.shearstack.physics.supply.SupplyPath;
  * @param objective        what to maximise
  * @param targetSpeed      the target speed, rad/s, when the spec gives one
  * @param tipSpeedCapMPerS highest rim speed the optimiser may use when no target speed is given
+ * @param calibration      loss coefficients (nominal, or fitted from the spec's calibration file)
  */
 record SizingModel(SupplyPath supply, Nozzle nozzle, double jetAngleDeg, double printerNozzleMm, double lineWidthMm,
-        Objective objective, OptionalDouble targetSpeed, double tipSpeedCapMPerS) {
+        Objective objective, OptionalDouble targetSpeed, double tipSpeedCapMPerS, Calibration calibration) {
 
     /** Target slip-decay number for the first guess of the disc count (physics.md §3.8b (i): Λ ≥ 3). */
     static final double TARGET_SLIP_DECAY = 4.0;
@@ -61,7 +62,7 @@ record SizingModel(SupplyPath supply, Nozzle nozzle, double jetAngleDeg, double 
                 endClearanceMm(t.gapMm(), printerNozzleMm) / 1000.0,
                 radialClearanceMm(t.diameterMm(), lineWidthMm) / 1000.0, portAreaMm2(t.exhaustDiameterMm()) * 1e-6,
                 jetAngleDeg);
-        return new TurbineModel(Gas.AIR, supply, nozzle, g, LossModel.twoShielded608(), Calibration.nominal(),
+        return new TurbineModel(Gas.AIR, supply, nozzle, g, LossModel.twoShielded608(), calibration,
                 FrictionClosure.BLENDED, GapMarch.Integration.EXPONENTIAL, SIZING_STEPS);
     }
 

@@ -16,18 +16,18 @@ import javax.xml.validation.SchemaFactory;
  * compiled with the two JDK work-arounds from that folder's README: the xml: namespace import is answered by
  * a local schema declaring xml:lang and xml:space, and maxOccurs="2147483647" becomes "unbounded" in memory.
  */
-final class ThreeMfSchema {
+public final class ThreeMfSchema {
 
     private ThreeMfSchema() {
     }
 
     /** The schema folder, or null when it is absent (tests then skip with a message). */
-    static Path folder() {
+    public static Path folder() {
         Path p = Path.of(System.getProperty("user.dir")).resolve("../shared/standards/3mf").normalize();
         return Files.isRegularFile(p.resolve("3mf-core-1.4.0.xsd")) ? p : null;
     }
 
-    static Schema core(Path folder) throws Exception {
+    public static Schema core(Path folder) throws Exception {
         Path xmlXsd = Files.createTempFile("xml-ns", ".xsd");
         Files.writeString(xmlXsd, "<xs:schema xmlns:xs=\"http://www.w3.org/2001/XMLSchema\" "
                 + "targetNamespace=\"http://www.w3.org/XML/1998/namespace\">"
@@ -47,7 +47,7 @@ final class ThreeMfSchema {
         return f.newSchema(src);
     }
 
-    static void validate(Schema schema, String xml) throws IOException, org.xml.sax.SAXException {
+    public static void validate(Schema schema, String xml) throws IOException, org.xml.sax.SAXException {
         schema.newValidator().validate(new StreamSource(new StringReader(xml)));
     }
 }

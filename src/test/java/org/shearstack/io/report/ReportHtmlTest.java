@@ -195,6 +195,16 @@ class ReportHtmlTest {
     }
 
     @Test
+    void summaryMarkdownLeadsWithTheVerdictAndTheSafePressure() {
+        String md = SummaryMarkdown.text(result.report());
+        List<String> lines = md.lines().toList();
+        assertEquals("# pinned-demo: " + json.get("verdict").asText().toUpperCase(Locale.ROOT), lines.get(0));
+        String pressure = byClass("span", "fig").get(0).getTextContent();
+        assertEquals("- Maximum safe supply pressure: **" + pressure + " bar(g)**", lines.get(2));
+        assertTrue(md.contains("## Cautions"));
+    }
+
+    @Test
     void outputDoesNotDependOnTheMachineLocale() {
         Locale before = Locale.getDefault();
         try {

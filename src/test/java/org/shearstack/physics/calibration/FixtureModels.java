@@ -39,4 +39,9 @@ public final class FixtureModels {
     public static Calibration shieldedTruth() {
         return new Calibration(AdmissionReading.RIM_STRUCK_CAPPED, 0.8, 0.8, 0.0015, 2.0, 1.0e-3, 0.85, "truth");
     }
+
+    /** Truth of fixture "classroom-run" (examples/classroom-demo.yaml): rim-struck flow does no work. */
+    public static Calibration classroomTruth() {
+        return new Calibration(AdmissionReading.JET_FRACTION_ONLY, 1.3, 1.3, 0.0015, 0.7, 1.0e-3, 0.9, "truth");
+    }
 }

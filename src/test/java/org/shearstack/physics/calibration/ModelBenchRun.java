@@ -93,5 +93,16 @@ final class ModelBenchRun {
                 FixtureModels.sealedTruth(), FixtureModels.INERTIA_KG_M2, 101), StandardCharsets.UTF_8);
         Files.writeString(dir.resolve("shielded-run.csv"), csv("shielded-run", FixtureModels.model(false),
                 FixtureModels.shieldedTruth(), FixtureModels.INERTIA_KG_M2, 202), StandardCharsets.UTF_8);
+        // the example design as resolved today (its sized model and the kit's rotating inertia)
+        var spec = org.shearstack.spec.SpecReader.read(Path.of("examples", "classroom-demo.yaml")).orThrow();
+        var design = org.shearstack.rules.DesignResolver.resolve(spec,
+                org.shearstack.profile.Profiles.load(java.util.Optional.empty()));
+        TurbineModel model = org.shearstack.rules.sizing.DesignModels.turbineModel(design);
+        double inertia = org.shearstack.assembly.RotatingInertia.of(org.shearstack.part.Dims.of(
+                org.shearstack.part.DesignValues.of(design::get, design::text, design::has)),
+                org.shearstack.geom.GeometryContext.withChordTolerance(0.02),
+                design.get(org.shearstack.rules.ProfileKeys.DENSITY)).totalKgM2();
+        Files.writeString(dir.resolve("classroom-run.csv"), csv("classroom-run", model, FixtureModels.classroomTruth(),
+                inertia, 303), StandardCharsets.UTF_8);
     }
 }

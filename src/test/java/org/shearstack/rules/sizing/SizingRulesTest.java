@@ -79,6 +79,18 @@ class SizingRulesTest {
         // exhaust ratio chosen inside the searched range
         double ratio = d.get(SpecKeys.ROTOR_EXHAUST_DIAMETER) / d2;
         assertTrue(ratio > 0.29 && ratio < 0.61, "r1/r2 " + ratio);
+        // the design never runs above the disc's allowable speed, and the derivation says so
+        assertTrue(d.get(SizingKeys.OPERATING_SPEED) * d2 / 2000 <= d.get(SizingKeys.ROTOR_TIP_SPEED) + 1e-9
+                || d.derivation(SizingKeys.OPERATING_SPEED).formula().contains("at or below the allowable"));
+        assertTrue(d.derivation(SizingKeys.OPERATING_SPEED).formula().contains("at or below the allowable"),
+                d.derivation(SizingKeys.OPERATING_SPEED).formula());
+        // gap no wider than the larger of the preferred gap and 4 Ekman thicknesses (physics.md §3.8b, from memory)
+        double omega = d.get(SizingKeys.ROTOR_TIP_SPEED) * 2000 / d2;
+        double bound = Math.max(d.get(org.shearstack.rules.geometry.GeoKeys.GAP_PREFERRED),
+                4 * SizingModel.ekmanMm(omega)) + d.get(ProfileKeys.LAYER_HEIGHT);
+        assertTrue(d.get(SpecKeys.ROTOR_GAP) <= bound, d.get(SpecKeys.ROTOR_GAP) + " > " + bound);
+        boolean atBound = d.get(SizingKeys.GAP_AT_SEARCH_BOUND) == 1.0;
+        assertEquals(atBound, d.derivation(SpecKeys.ROTOR_GAP).formula().contains("AT THE SEARCH BOUND"));
     }
 
     @Test
@@ -122,7 +134,8 @@ class SizingRulesTest {
                 s -> s.contains("supply.blowdown.to: expected")),
                 up.problems().toString());
         BadInputException ex = assertThrows(BadInputException.class,
-                () -> resolve(TARGET_SPEC.replace("  gap: 0.8 mm\n", "  gap: 0.8 mm\n  exhaust-diameter: 90 mm\n")));
+                () -> resolve(TARGET_SPEC.replace("  diameter: 80 mm\n", "  exhaust-diameter: 300 mm\n")));
+        // the diameter is sized (about 60 mm at 15 000 rpm), so only the SIZE- rule can see the contradiction
         assertTrue(ex.problems().stream().map(Problem::format).anyMatch(
                 s -> s.contains("rotor.exhaust-diameter: expected an exhaust diameter below the disc diameter")),
                 ex.problems().toString());
@@ -137,17 +150,25 @@ class SizingRulesTest {
     }
 
     @Test
-    void tipSpeedLimitIsTheHoledDiscFormula() {
-        // derived (physics.md §4.2): S_allow 12.5 MPa, PLA rho 1240, nu 0.36 -> 109.5 m/s for a small-hole disc.
-        // The rule uses S = 0.7 x XY strength / safety factor, so seed XY strength 12.5/0.7 MPa and factor 1.
+    void tipSpeedLimitIsTheBurstChecksAllowableSpeed() {
+        // Holed-disc peak hoop stress (3+ν)/4·ρω²[b² + (1−ν)/(3+ν)·a²] (Timoshenko & Goodier §32; physics.md §4.1)
+        // with a/b = 0.6, the port allowance 1.5 and S = 0.7 × 50 MPa / 3 (physics.md §4.3, §12.7):
+        // v = √(S/1.5 / ((3.36/4)·1240·(1 + 0.64/3.36·0.36))) = 83.594 m/s, derived (physics.md §4.1–§4.2).
         Rule rule = SizingRules.rules().stream().filter(r -> r.id().equals("SIZE-TIP-SPEED-LIMIT")).findFirst()
                 .orElseThrow();
         Resolution r = Engine.of(List.of(rule)).resolve("t", "t.yaml", List.of(
                 Seed.number(ProfileKeys.DENSITY, 1240, Derivation.Origin.PROFILE, "pla", "", ""),
                 Seed.number(ProfileKeys.POISSON_RATIO, 0.36, Derivation.Origin.PROFILE, "pla", "", ""),
-                Seed.number(ProfileKeys.TENSILE_STRENGTH_XY, 12.5e6 / 0.7, Derivation.Origin.PROFILE, "pla", "", ""),
-                Seed.number(SpecKeys.TARGETS_SAFETY_FACTOR, 1, Derivation.Origin.SPEC, "t", "", "")));
-        assertEquals(109.5, r.design().get(SizingKeys.ROTOR_TIP_SPEED_LIMIT), 0.05);
+                Seed.number(ProfileKeys.TENSILE_STRENGTH_XY, 50e6, Derivation.Origin.PROFILE, "pla", "", ""),
+                Seed.number(SpecKeys.TARGETS_SAFETY_FACTOR, 3, Derivation.Origin.SPEC, "t", "", "")));
+        double limit = r.design().get(SizingKeys.ROTOR_TIP_SPEED_LIMIT);
+        assertEquals(83.594, limit, 0.001);
+        // and the same number the BURST-RUNAWAY check's assessment gives a 60 mm disc ported out to 36 mm
+        org.shearstack.physics.stress.BurstAssessment a = org.shearstack.physics.stress.BurstAssessment.of(
+                org.shearstack.physics.stress.SpinningAnnulus.withExhaustPorts(0.030, 0.018), 1240, 0.36,
+                org.shearstack.physics.stress.PrintedStrength.inPlanePa(50e6),
+                new org.shearstack.physics.stress.SafetyFactor(3), 1000);
+        assertEquals(a.allowableSpeedRadPerS() * 0.030, limit, 1e-9 * limit);
     }
 
     @Test
