@@ -34,6 +34,7 @@ public final class SpecKeys {
     public static final Key PRINTER_ADJUST_HOLE_COMPENSATION = Key.of("printer-adjust.hole-compensation", LENGTH);
     public static final Key PRINTER_ADJUST_OUTER_COMPENSATION = Key.of("printer-adjust.outer-compensation", LENGTH);
     public static final Key FILAMENT = Key.of("filament", TEXT);
+    public static final Key CALIBRATION = Key.of("calibration", TEXT);
     public static final Key ROTOR_DIAMETER = Key.of("rotor.diameter", LENGTH);
     public static final Key ROTOR_DISCS = Key.of("rotor.discs", COUNT);
     public static final Key ROTOR_DISC_THICKNESS = Key.of("rotor.disc-thickness", LENGTH);
@@ -93,6 +94,7 @@ public final class SpecKeys {
                 PRINTER_ADJUST_HOLE_COMPENSATION,
                 PRINTER_ADJUST_OUTER_COMPENSATION,
                 FILAMENT,
+                CALIBRATION,
                 ROTOR_DIAMETER,
                 ROTOR_DISCS,
                 ROTOR_DISC_THICKNESS,

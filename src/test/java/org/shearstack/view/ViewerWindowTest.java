@@ -82,7 +82,8 @@ class ViewerWindowTest {
             waitUntil(() -> title(session).equals("classroom-demo-two"));
 
             String broken = good.replace("name: classroom-demo", "name: classroom-demo-two")
-                    .replace("pressure: 4 bar(g)", "pressure: 4 parsec");
+                    .replaceFirst("(?m)^(\\s+pressure:) [^#\\n]*", "$1 4 parsec ");
+            assertFalse(broken.equals(good.replace("name: classroom-demo", "name: classroom-demo-two")), "the edit must break the spec");
             Files.writeString(spec, broken, StandardCharsets.UTF_8);
             waitUntil(() -> FxToolkit.call(() -> session.window().bannerShown()));
             String banner = FxToolkit.call(() -> session.window().bannerText());

@@ -39,9 +39,9 @@ record RotorReading(double outerRadiusM, double boreRadiusM, double portOuterRad
     List<SpinningPart> spinningParts() {
         List<SpinningPart> parts = new ArrayList<>();
         if (!Double.isNaN(portOuterRadiusM) && portOuterRadiusM > boreRadiusM && portOuterRadiusM < outerRadiusM) {
-            parts.add(new SpinningPart("disc", SpinningAnnulus.withExhaustPorts(outerRadiusM, portOuterRadiusM), true));
+            parts.add(new SpinningPart("rotor-disc", SpinningAnnulus.withExhaustPorts(outerRadiusM, portOuterRadiusM), true));
         } else {
-            parts.add(new SpinningPart("disc", boreRadiusM > 0 ? SpinningAnnulus.plainBore(outerRadiusM, boreRadiusM)
+            parts.add(new SpinningPart("rotor-disc", boreRadiusM > 0 ? SpinningAnnulus.plainBore(outerRadiusM, boreRadiusM)
                     : new SpinningAnnulus(outerRadiusM, 0, 1), true));
         }
         if (!Double.isNaN(spacerOuterRadiusM) && spacerOuterRadiusM > boreRadiusM && boreRadiusM > 0) {

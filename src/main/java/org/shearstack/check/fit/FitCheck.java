@@ -58,7 +58,7 @@ public final class FitCheck {
 
         Fit metalHousing = Fit.between(Iso286.zone(in.outsideDiameterMm(), in.housingClass()), od);
         PrintedSeat seat = PrintedSeat.hole(od, in.seatInterferenceMm(), pp);
-        out.add(seatFinding("FIT-BEARING-SEAT", in.bearing() + " outer ring in the printed housing seat", "housing",
+        out.add(seatFinding("FIT-BEARING-SEAT", in.bearing() + " outer ring in the printed housing seat", "cover-free and cover-drive",
                 seat, "a metal housing at " + Findings.num(in.outsideDiameterMm(), 4) + " " + in.housingClass()
                         + " would give " + range(metalHousing)));
 
@@ -69,7 +69,7 @@ public final class FitCheck {
                     in.bearing() + " bore on a metal shaft " + Findings.num(in.boreMm(), 4) + " " + in.metalShaftClass()
                             + " (" + shaft.toString() + "): " + range(f) + ", " + kind(f) + " (ISO 286 and normal-class"
                             + " ring tolerances).",
-                    -f.minClearanceMm(), Double.NaN, "mm", Double.NaN, "shaft", "bearing journal", ""));
+                    -f.minClearanceMm(), Double.NaN, "mm", Double.NaN, "bearing-" + in.bearing(), "bearing journal", ""));
         } else {
             PrintedSeat journal = PrintedSeat.shaft(bore, in.journalInterferenceMm(), pp);
             out.add(seatFinding("FIT-BEARING-JOURNAL", in.bearing() + " bore on the printed journal", "hub", journal,
@@ -124,7 +124,7 @@ public final class FitCheck {
             out.add(Findings.of("FIT-DISC-BORE", dSev,
                     "Disc bores on the printed hub (" + Findings.num(in.hubDiameterMm(), 4) + " mm): " + range(f) + ".",
                     f.maxClearanceMm(), MAX_DISC_BORE_CLEARANCE_MM, "mm", MAX_DISC_BORE_CLEARANCE_MM / f.maxClearanceMm(),
-                    "disc", "disc bore on hub", dSev == Severity.OK ? ""
+                    "rotor-disc", "disc bore on hub", dSev == Severity.OK ? ""
                             : "calibrate hole and outer compensation, or ream the bores to size"));
         }
         return out;

@@ -70,7 +70,7 @@ public final class StackUpCheck {
                         + Findings.num(r.rssMinMm(), 3) + "…" + Findings.num(r.rssMaxMm(), 3) + " mm (" + a.discs()
                         + " discs, " + a.spacers() + " spacers); under full pressure the covers bulge out by up to "
                         + Findings.num(a.coverDeflectionMm(), 3) + " mm each.",
-                r.worstMinMm(), 0, "mm", Double.NaN, "rotor", "end play",
+                r.worstMinMm(), 0, "mm", Double.NaN, "rotor-disc and cover-free", "end play",
                 sev == Severity.OK ? "" : "deepen the chamber by " + Findings.num(-r.worstMinMm() + 0.2, 3)
                         + " mm, thin the spacers, or sand the pack");
     }
@@ -89,7 +89,7 @@ public final class StackUpCheck {
                         + Findings.num(res.worstMinMm(), 3) + "…" + Findings.num(res.worstMaxMm(), 3) + " mm, RSS "
                         + Findings.num(res.rssMinMm(), 3) + "…" + Findings.num(res.rssMaxMm(), 3)
                         + " mm after runout and side play.",
-                res.worstMinMm(), 0, "mm", Double.NaN, "housing", "rim clearance",
+                res.worstMinMm(), 0, "mm", Double.NaN, "housing-ring", "rim clearance",
                 sev == Severity.OK ? "" : "enlarge the chamber bore by " + Findings.num(-2 * res.worstMinMm() + 0.4, 3)
                         + " mm or tighten the disc bores on the hub");
     }

@@ -39,7 +39,7 @@ public final class GapSearchBound implements Check {
                 + " upper end of the optimiser's search range: the model's score still rises with wider gaps because"
                 + " more of the jet faces gaps instead of disc rims (admission fraction), so the bound, not the model,"
                 + " set the gap. Wider gaps than a few boundary-layer thicknesses couple the flow poorly to the discs,"
-                + " and the model is least certain there.", gap, gap, "mm", 1.0, "rotor", "gap",
+                + " and the model is least certain there.", gap, gap, "mm", 1.0, "rotor-disc", "gap",
                 "keep the sized gap, or pin rotor.gap from your own trials (about 0.75 mm gaps with 0.75 mm discs on a"
                         + " 0.4 mm nozzle are common practice) and compare with a bench run"));
     }

@@ -52,7 +52,7 @@ public final class BearingCheck {
                         + "; common-practice limit " + Findings.num(limit, 3) + " rpm for this bearing (n·dm 400 000"
                         + (in.closure() == BearingSpeed.Closure.CONTACT_SEALED ? ", contact seals dn 150 000" : "")
                         + "), ordinary grease to " + Findings.num(general, 3) + " rpm. Check the maker's limiting speed.",
-                worst, limit, "rpm", limit / worst, "bearing", in.designation(),
+                worst, limit, "rpm", limit / worst, "bearing-" + in.designation(), in.designation(),
                 sev == Severity.OK ? "" : (in.closure() == BearingSpeed.Closure.CONTACT_SEALED
                         ? "use shielded (ZZ) bearings, high-speed grease, or limit the speed"
                         : "use high-speed grease or a smaller bearing, or limit the speed")));
@@ -63,7 +63,7 @@ public final class BearingCheck {
                         + " °C); " + (warm ? "the bearings run above ordinary grease speeds and may reach about "
                                 + Findings.num(WARM_BEARING_C, 2) + " °C (from memory)"
                                 : "the bearings run within ordinary grease speeds") + ".",
-                warm ? WARM_BEARING_C : Double.NaN, in.glassTransitionC(), "degC", Double.NaN, "housing",
+                warm ? WARM_BEARING_C : Double.NaN, in.glassTransitionC(), "degC", Double.NaN, "cover-free and cover-drive",
                 "bearing seats", tSev == Severity.OK ? "" : "print the seats in PETG, ASA or ABS, or use a metal"
                         + " bearing holder; run short tests and feel the housing"));
         return out;

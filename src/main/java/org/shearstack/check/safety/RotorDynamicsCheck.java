@@ -74,7 +74,7 @@ public final class RotorDynamicsCheck {
                         + " rpm; keep speeds below " + Findings.num(100 / CRITICAL_MARGIN, 2)
                         + " % of the critical (common practice).",
                 rpm(Double.isNaN(op) ? run : Math.max(op, run)), rpm(wc / CRITICAL_MARGIN), "rpm",
-                Math.min(mOp, mRun) / CRITICAL_MARGIN, "shaft", "shaft between bearings",
+                Math.min(mOp, mRun) / CRITICAL_MARGIN, "", "shaft between bearings",
                 sev == Severity.OK ? "" : "a thicker or metal shaft, a shorter bearing span, or a lighter pack"));
 
         double grade = Balance.parseGradeMmPerS(in.balanceGrade());
@@ -91,7 +91,7 @@ public final class RotorDynamicsCheck {
                         + Findings.num(in.packMassKg() * 1000, 3) + " g); the printer's positional tolerance and the bore"
                         + " clearance imply about " + Findings.num(ePrinted, 3) + " µm (RSS over " + in.partCount()
                         + " parts), i.e. grade G" + Findings.num(gPrinted, 3) + ".",
-                ePrinted, ePer, "µm", ePer / ePrinted, "rotor", "mass-centre offset",
+                ePrinted, ePer, "µm", ePer / ePrinted, "rotor-disc, spacer, hub-sleeve", "mass-centre offset",
                 bSev == Severity.OK ? "" : "balance the assembled rotor in place (static balancing on knife edges at"
                         + " least), run slower, or ream the disc bores to a tight fit on the hub"));
         return out;

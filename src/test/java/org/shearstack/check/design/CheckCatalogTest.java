@@ -29,7 +29,7 @@ class CheckCatalogTest {
             assertTrue(codes.contains(c), "missing " + c + " in " + codes);
         }
         assertFalse(CheckCatalog.passes(f));
-        Finding burst = f.stream().filter(x -> x.code().equals("BURST-RUNAWAY") && x.part().equals("disc"))
+        Finding burst = f.stream().filter(x -> x.code().equals("BURST-RUNAWAY") && x.part().equals("rotor-disc"))
                 .findFirst().orElseThrow();
         assertEquals(Severity.FAIL, burst.severity());
         SafetySummary s = CheckCatalog.safetySummary(d, RunawaySource.lockedFlowBound()).orElseThrow();
