@@ -33,6 +33,19 @@ final class ContactResolver {
     private record Edge(long px, long py, long qx, long qy) {
     }
 
+    /** A slab's region and the region directly below it (or null), compared by identity. */
+    private record IdentityPair(Geometry region, Geometry below) {
+        @Override
+        public boolean equals(Object o) {
+            return o instanceof IdentityPair p && p.region == region && p.below == below;
+        }
+
+        @Override
+        public int hashCode() {
+            return 31 * System.identityHashCode(region) + System.identityHashCode(below);
+        }
+    }
+
     /** Returns the regions with contacts opened, or the same list if none were found. */
     static List<Geometry> open(GeometryContext ctx, List<Geometry> regions, double[] z0, double[] z1, int round) {
         List<Geometry> out = new ArrayList<>(regions);
@@ -42,7 +55,19 @@ final class ContactResolver {
         // tangent curves stay within a grid cell of each other over a length of about sqrt(2 R grid), so a
         // pinch found again in a later round is opened with a square four times as wide
         double half = g * Math.pow(4, round);
+        // slabs sharing a region (and the region below) share their result: computed once per distinct pair
+        java.util.Map<IdentityPair, Geometry> done = new java.util.HashMap<>();
         for (int s = 0; s < regions.size(); s++) {
+            boolean stacked = s > 0 && z1[s - 1] == z0[s];
+            IdentityPair pair = new IdentityPair(regions.get(s), stacked ? regions.get(s - 1) : null);
+            Geometry known = done.get(pair);
+            if (known != null) {
+                if (known != regions.get(s)) {
+                    out.set(s, known);
+                    changed = true;
+                }
+                continue;
+            }
             List<Geometry> cuts = new ArrayList<>();
             Set<Long> seen = new HashSet<>();
             Set<Long> pinched = new HashSet<>();
@@ -54,7 +79,7 @@ final class ContactResolver {
                     }
                 }
             });
-            if (s > 0 && z1[s - 1] == z0[s]) {
+            if (stacked) {
                 Set<Edge> below = new HashSet<>();
                 forEachRing(regions.get(s - 1), cs -> {
                     for (int i = 0; i + 1 < cs.length; i++) {
@@ -74,6 +99,7 @@ final class ContactResolver {
                 out.set(s, OverlayNG.overlay(regions.get(s), cut, OverlayNG.DIFFERENCE, ctx.precisionModel()));
                 changed = true;
             }
+            done.put(pair, out.get(s));
         }
         return changed ? out : regions;
     }

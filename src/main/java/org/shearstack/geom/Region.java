@@ -283,7 +283,42 @@ public final class Region {
         params.setQuadrantSegments(Math.max(2, ctx.segmentCount(Math.abs(distanceMm)) / 4));
         params.setJoinStyle(BufferParameters.JOIN_ROUND);
         Geometry buffered = BufferOp.bufferOp(geometry, distanceMm, params);
+        // The buffer of a geometry on the grid's factory rounds every output vertex to the grid already; when the
+        // result is also valid, the snap-rounding reduction (an OverlayNG pass, several times the buffer's cost)
+        // would return it unchanged in all but near-touching cases, so it is skipped.
+        if (buffered.isEmpty()) {
+            return empty(ctx);
+        }
+        if (buffered.getDimension() == 2 && onGrid(buffered) && buffered.isValid()) {
+            return new Region(ctx, polygonal(ctx, buffered));
+        }
         return fromGeometry(ctx, buffered);
+    }
+
+    private boolean onGrid(Geometry g) {
+        double scale = ctx.scale();
+        boolean[] ok = {true};
+        g.apply((org.locationtech.jts.geom.CoordinateSequenceFilter) new org.locationtech.jts.geom.CoordinateSequenceFilter() {
+            @Override
+            public void filter(CoordinateSequence seq, int i) {
+                double x = seq.getX(i) * scale;
+                double y = seq.getY(i) * scale;
+                if (x != Math.rint(x) || y != Math.rint(y)) {
+                    ok[0] = false;
+                }
+            }
+
+            @Override
+            public boolean isDone() {
+                return !ok[0];
+            }
+
+            @Override
+            public boolean isGeometryChanged() {
+                return false;
+            }
+        });
+        return ok[0];
     }
 
     /** Rotation about the origin, counter-clockwise in degrees; exact (no rounding) at multiples of 90°. */
@@ -437,7 +472,13 @@ public final class Region {
     /** Exact equality of the point sets' representations after normalisation (same rings, same vertices). */
     @Override
     public boolean equals(Object o) {
-        return o instanceof Region r && r.ctx.equals(ctx) && r.geometry.equalsNorm(geometry);
+        if (o == this) {
+            return true;
+        }
+        // point count and envelope first: normalising copies both geometries, the costly part of a comparison
+        return o instanceof Region r && r.ctx.equals(ctx) && r.geometry.getNumPoints() == geometry.getNumPoints()
+                && r.geometry.getEnvelopeInternal().equals(geometry.getEnvelopeInternal())
+                && r.geometry.equalsNorm(geometry);
     }
 
     @Override

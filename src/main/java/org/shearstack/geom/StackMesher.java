@@ -40,7 +40,7 @@ final class StackMesher {
     private StackMesher(GeometryContext ctx, int expectedTriangles, boolean assumeNoded) {
         this.ctx = ctx;
         this.assumeNoded = assumeNoded;
-        this.vertices = new VertexTable(ctx.scale());
+        this.vertices = new VertexTable(ctx.scale(), expectedTriangles / 2);
         this.triangles = new IntList(3 * expectedTriangles);
     }
 
@@ -98,8 +98,45 @@ final class StackMesher {
     private record Interface(double z, Geometry below, Geometry above) {
     }
 
-    /** One interface's faces (triangles as grid points, winding fixed) and its node index. */
-    private record Faces(long iz, List<Coordinate[]> triangles, NodeIndex nodes) {
+    /**
+     * One interface's faces without height: local vertices (grid indices x, y), triangles on them (winding
+     * fixed), and the interface's node index.
+     */
+    private record Faces(long[] xy, int[] triangles, NodeIndex nodes) {
+    }
+
+    /**
+     * The regions on both sides of an interface, equal when both sides are the same geometry or exactly equal
+     * geometries (same rings, same vertex order), which have the same faces and nodes.
+     */
+    private static final class PairKey {
+        private final Geometry below;
+        private final Geometry above;
+        private final int hash;
+
+        PairKey(Geometry below, Geometry above) {
+            this.below = below;
+            this.above = above;
+            this.hash = 31 * shapeHash(below) + shapeHash(above);
+        }
+
+        private static int shapeHash(Geometry g) {
+            return g == null ? 0 : g.getNumPoints() * 31 + g.getEnvelopeInternal().hashCode();
+        }
+
+        private static boolean same(Geometry a, Geometry b) {
+            return a == b || (a != null && b != null && a.getNumPoints() == b.getNumPoints() && a.equalsExact(b));
+        }
+
+        @Override
+        public boolean equals(Object o) {
+            return o instanceof PairKey k && k.hash == hash && same(below, k.below) && same(above, k.above);
+        }
+
+        @Override
+        public int hashCode() {
+            return hash;
+        }
     }
 
     private void run(List<Band> bands) {
@@ -122,13 +159,38 @@ final class StackMesher {
                 interfaces.add(new Interface(b.z1, b.geometry, null));
             }
         }
-        // interfaces are independent: compute them in parallel, then emit in order, so the output (vertex
-        // and triangle order) is the same as a sequential run
-        List<Faces> faces = java.util.stream.IntStream.range(0, interfaces.size()).parallel()
-                .mapToObj(k -> faces(interfaces.get(k))).toList();
-        for (Faces f : faces) {
-            for (Coordinate[] t : f.triangles) {
-                triangles.add(vertex(t[0], f.iz), vertex(t[1], f.iz), vertex(t[2], f.iz));
+        // Interfaces with the same pair of regions (below, above) have the same faces and node set at another
+        // height: each distinct pair is computed once (its first occurrence, in order, so the result does not
+        // depend on scheduling). Distinct interfaces are independent: computed in parallel, then emitted in
+        // order, so the output (vertex and triangle order) is the same as a sequential run.
+        int[] rep = new int[interfaces.size()];
+        List<Integer> distinct = new ArrayList<>();
+        java.util.Map<PairKey, Integer> firstOf = new java.util.HashMap<>();
+        for (int k = 0; k < interfaces.size(); k++) {
+            Interface in = interfaces.get(k);
+            Integer first = firstOf.putIfAbsent(new PairKey(in.below, in.above), distinct.size());
+            if (first == null) {
+                rep[k] = distinct.size();
+                distinct.add(k);
+            } else {
+                rep[k] = first;
+            }
+        }
+        List<Faces> computed = distinct.parallelStream().map(k -> faces(interfaces.get(k))).toList();
+        List<Faces> faces = new ArrayList<>(interfaces.size());
+        for (int k = 0; k < interfaces.size(); k++) {
+            faces.add(computed.get(rep[k]));
+        }
+        for (int k = 0; k < interfaces.size(); k++) {
+            Faces f = faces.get(k);
+            long iz = ctx.gridIndex(interfaces.get(k).z);
+            int[] global = new int[f.xy.length / 2];
+            for (int v = 0; v < global.length; v++) {
+                global[v] = vertices.index(f.xy[2 * v], f.xy[2 * v + 1], iz);
+            }
+            int[] c = f.triangles;
+            for (int t = 0; t < c.length; t += 3) {
+                triangles.add(global[c[t]], global[c[t + 1]], global[c[t + 2]]);
             }
         }
         for (int i = 0; i < n; i++) {
@@ -163,7 +225,23 @@ final class StackMesher {
         List<Coordinate[]> tris = new ArrayList<>();
         triangulate(up, true, tris);
         triangulate(down, false, tris);
-        return new Faces(ctx.gridIndex(in.z), tris, nodes);
+        // index the face vertices locally, so each is looked up once per height in the mesh's vertex table
+        VertexTable local = new VertexTable(ctx.scale(), Math.max(16, tris.size()));
+        int[] corners = new int[3 * tris.size()];
+        double scale = ctx.scale();
+        int k = 0;
+        for (Coordinate[] t : tris) {
+            for (Coordinate c : t) {
+                corners[k++] = local.index((long) Math.rint(c.x * scale), (long) Math.rint(c.y * scale), 0);
+            }
+        }
+        double[] xyz = local.coordinates();
+        long[] xy = new long[2 * local.size()];
+        for (int v = 0; v < local.size(); v++) {
+            xy[2 * v] = (long) Math.rint(xyz[3 * v] * scale);
+            xy[2 * v + 1] = (long) Math.rint(xyz[3 * v + 1] * scale);
+        }
+        return new Faces(xy, corners, nodes);
     }
 
     /**
@@ -216,7 +294,8 @@ final class StackMesher {
     }
 
     private int vertex(Coordinate c, long iz) {
-        return vertices.index(Math.round(c.x * ctx.scale()), Math.round(c.y * ctx.scale()), iz);
+        double scale = ctx.scale(); // grid points: the products are whole numbers
+        return vertices.index((long) Math.rint(c.x * scale), (long) Math.rint(c.y * scale), iz);
     }
 
     private void walls(Band band, NodeIndex bottomNodes, NodeIndex topNodes) {
@@ -240,6 +319,12 @@ final class StackMesher {
         int n = cs.length - 1;
         List<Coordinate> bottom = new ArrayList<>();
         List<Coordinate> top = new ArrayList<>();
+        // consecutive segments share their end vertices: carried over instead of looked up again
+        Coordinate first = reverse ? cs[n] : cs[0];
+        int firstB = vertex(first, iz0);
+        int firstT = vertex(first, iz1);
+        lastB = firstB;
+        lastT = firstT;
         for (int k = 0; k < n; k++) {
             Coordinate p = reverse ? cs[n - k] : cs[k];
             Coordinate q = reverse ? cs[n - k - 1] : cs[k + 1];
@@ -248,21 +333,26 @@ final class StackMesher {
             bottomNodes.split(p, q, bottom);
             topNodes.split(p, q, top);
             wallSplits += bottom.size() + top.size() - 4;
-            zipper(p, q, bottom, top, iz0, iz1);
+            boolean closing = k == n - 1;
+            zipper(p, q, bottom, top, iz0, iz1, lastB, lastT, closing ? firstB : -1, closing ? firstT : -1);
         }
     }
 
+    /** The end vertices (bottom, top) of the last zipped segment. */
+    private int lastB;
+    private int lastT;
+
     /** Triangulates the strip between the bottom chain and the top chain of one wall segment p→q. */
     private void zipper(Coordinate p, Coordinate q, List<Coordinate> bottom, List<Coordinate> top, long iz0,
-            long iz1) {
+            long iz1, int b0, int t0, int bEnd, int tEnd) {
         double dx = q.x - p.x;
         double dy = q.y - p.y;
         int i = 0;
         int j = 0;
         int mb = bottom.size() - 1;
         int mt = top.size() - 1;
-        int b = vertex(bottom.get(0), iz0);
-        int t = vertex(top.get(0), iz1);
+        int b = b0;
+        int t = t0;
         while (i < mb || j < mt) {
             boolean advanceBottom;
             if (i == mb) {
@@ -273,15 +363,19 @@ final class StackMesher {
                 advanceBottom = param(bottom.get(i + 1), p, dx, dy) <= param(top.get(j + 1), p, dx, dy);
             }
             if (advanceBottom) {
-                int nb = vertex(bottom.get(++i), iz0);
+                ++i;
+                int nb = i == mb && bEnd >= 0 ? bEnd : vertex(bottom.get(i), iz0);
                 triangles.add(b, nb, t);
                 b = nb;
             } else {
-                int nt = vertex(top.get(++j), iz1);
+                ++j;
+                int nt = j == mt && tEnd >= 0 ? tEnd : vertex(top.get(j), iz1);
                 triangles.add(b, nt, t);
                 t = nt;
             }
         }
+        lastB = b;
+        lastT = t;
     }
 
     private static double param(Coordinate c, Coordinate p, double dx, double dy) {

@@ -81,7 +81,30 @@ final class StackNoder {
         return c != 0 ? c : Double.compare(a.y, b.y);
     }
 
+    /**
+     * Nodes the distinct regions (by identity) once and shares each result among the slabs that had the same
+     * region, so equal slabs stay one geometry object for the steps after (contacts, faces per interface pair).
+     */
     private static NodeResult nodeOnce(GeometryContext ctx, List<Geometry> regions) {
+        java.util.IdentityHashMap<Geometry, Integer> index = new java.util.IdentityHashMap<>();
+        List<Geometry> distinct = new ArrayList<>();
+        for (Geometry g : regions) {
+            if (index.putIfAbsent(g, distinct.size()) == null) {
+                distinct.add(g);
+            }
+        }
+        NodeResult r = nodeDistinct(ctx, distinct);
+        if (distinct.size() == regions.size()) {
+            return r;
+        }
+        List<Geometry> out = new ArrayList<>(regions.size());
+        for (Geometry g : regions) {
+            out.add(r.regions.get(index.get(g)));
+        }
+        return new NodeResult(out, r.repaired);
+    }
+
+    private static NodeResult nodeDistinct(GeometryContext ctx, List<Geometry> regions) {
         // Node each distinct segment once: slabs repeat most of their neighbours' rings, and noding the
         // repeated copies together would be quadratic in the number of slabs.
         Map<Segment, Integer> segmentIds = new HashMap<>();

@@ -16,7 +16,16 @@ final class VertexTable {
     private int mask = slots.length - 1;
 
     VertexTable(double scale) {
+        this(scale, 1024);
+    }
+
+    /** A table sized for about {@code expected} vertices (it grows beyond). */
+    VertexTable(double scale, int expected) {
         this.scale = scale;
+        int n = Math.max(1024, Math.min(expected, 1 << 26));
+        this.xyz = new double[3 * n];
+        this.slots = new int[Integer.highestOneBit(n - 1) << 2];
+        this.mask = slots.length - 1;
     }
 
     int size() {

@@ -23,10 +23,17 @@ public record Problem(String file, int line, int column, String keyPath, String 
         message = message == null ? "" : message;
     }
 
-    /** {@code file:line:column: key.path: expected ..., found ...[; message]}. */
+    /**
+     * {@code file:line:column: key.path: expected ..., found ...[; message]}; without a line (0, e.g. a
+     * command-line option) just {@code file: ...}.
+     */
     public String format() {
         StringBuilder b = new StringBuilder();
-        b.append(file).append(':').append(line).append(':').append(column).append(": ");
+        b.append(file);
+        if (line > 0) {
+            b.append(':').append(line).append(':').append(column);
+        }
+        b.append(": ");
         if (!keyPath.isEmpty()) {
             b.append(keyPath).append(": ");
         }

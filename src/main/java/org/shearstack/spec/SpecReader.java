@@ -49,6 +49,8 @@ public final class SpecReader {
                 return single(label, "a spec of at most " + MAX_BYTES + " bytes", Files.size(file) + " bytes");
             }
             bytes = Files.readAllBytes(file);
+        } catch (java.nio.file.NoSuchFileException e) {
+            return single(label, "an existing spec file", "no such file");
         } catch (IOException e) {
             return single(label, "a readable file", "cannot read it (" + e.getClass().getSimpleName() + ")");
         }

@@ -1,13 +1,10 @@
 package org.shearstack.io.mesh;
 
 import java.io.BufferedOutputStream;
-import java.io.BufferedWriter;
 import java.io.ByteArrayOutputStream;
 import java.io.FilterOutputStream;
 import java.io.IOException;
 import java.io.OutputStream;
-import java.io.OutputStreamWriter;
-import java.io.Writer;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -52,36 +49,37 @@ public final class ThreeMfWriter {
      * by mesh identity.
      */
     public static final class MeshTexts {
-        private final java.util.Map<Mesh, String> byMesh = new java.util.IdentityHashMap<>();
+        private final java.util.Map<Mesh, byte[]> byMesh = new java.util.IdentityHashMap<>();
 
-        String of(Mesh mesh) throws IOException {
+        byte[] of(Mesh mesh) {
             synchronized (byMesh) {
-                String s = byMesh.get(mesh);
+                byte[] s = byMesh.get(mesh);
                 if (s != null) {
                     return s;
                 }
             }
-            java.io.StringWriter sw = new java.io.StringWriter(64 * mesh.triangleCount() + 64 * mesh.vertexCount());
-            writeMesh(mesh, sw);
-            String s = sw.toString();
+            byte[] s = meshBytes(mesh);
             synchronized (byMesh) {
-                byMesh.putIfAbsent(mesh, s);
+                byte[] known = byMesh.putIfAbsent(mesh, s);
+                return known != null ? known : s;
             }
-            return s;
         }
     }
 
     /** As {@link #write(ThreeMfModel, OutputStream)}, sharing formatted meshes through {@code texts}. */
     public static void write(ThreeMfModel model, OutputStream out, MeshTexts texts) throws IOException {
         ZipOutputStream zip = new ZipOutputStream(new NonClosing(out), StandardCharsets.UTF_8);
-        zip.setLevel(Deflater.BEST_SPEED); // fixed level: same bytes on every run
+        // Deflate level 1 (BEST_SPEED), default strategy: the fastest level that still matches strings (the XML
+        // shrinks about 7:1; Huffman-only coding is slower here and keeps about 2:1); a fixed level gives the same
+        // bytes on every run
+        zip.setLevel(Deflater.BEST_SPEED);
         boolean thumb = model.thumbnailPng() != null;
         entry(zip, "[Content_Types].xml");
         text(zip, contentTypes(thumb));
         entry(zip, "_rels/.rels");
         text(zip, rels(thumb));
         entry(zip, MODEL_ENTRY);
-        Writer w = new BufferedWriter(new OutputStreamWriter(new NonClosing(zip), StandardCharsets.UTF_8), 1 << 16);
+        BufferedOutputStream w = new BufferedOutputStream(new NonClosing(zip), 1 << 16);
         writeModel(model, w, texts);
         w.flush();
         if (thumb) {
@@ -124,13 +122,13 @@ public final class ThreeMfWriter {
 
     /** The model part's XML, for tests that validate it against the schema. */
     public static String modelXml(ThreeMfModel model) {
-        java.io.StringWriter sw = new java.io.StringWriter();
+        ByteArrayOutputStream out = new ByteArrayOutputStream();
         try {
-            writeModel(model, sw, new MeshTexts());
+            writeModel(model, out, new MeshTexts());
         } catch (IOException e) {
             throw new IllegalStateException(e);
         }
-        return sw.toString();
+        return out.toString(StandardCharsets.UTF_8);
     }
 
     private static void entry(ZipOutputStream zip, String name) throws IOException {
@@ -161,7 +159,8 @@ public final class ThreeMfWriter {
                 + "</Relationships>\n";
     }
 
-    private static void writeModel(ThreeMfModel model, Writer w, MeshTexts texts) throws IOException {
+    private static void writeModel(ThreeMfModel model, OutputStream out, MeshTexts texts) throws IOException {
+        Utf8 w = new Utf8(out);
         boolean own = model.metadata().keySet().stream().anyMatch(k -> k.startsWith("shearstack:"));
         w.write("<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n<model unit=\"millimeter\" xml:lang=\"en-US\" xmlns=\"");
         w.write(CORE_NAMESPACE);
@@ -199,7 +198,7 @@ public final class ThreeMfWriter {
                 }
                 w.write("   </components>\n");
             } else {
-                w.write(texts.of(o.mesh()));
+                out.write(texts.of(o.mesh()));
             }
             w.write("  </object>\n");
         }
@@ -214,33 +213,23 @@ public final class ThreeMfWriter {
         w.write(" </build>\n</model>\n");
     }
 
-    private static void writeMesh(Mesh mesh, Writer w) throws IOException {
-        w.write("   <mesh>\n    <vertices>\n");
-        StringBuilder sb = new StringBuilder(1 << 16);
-        for (int v = 0; v < mesh.vertexCount(); v++) {
-            sb.append("     <vertex x=\"");
-            appendNumber(sb, mesh.x(v));
-            sb.append("\" y=\"");
-            appendNumber(sb, mesh.y(v));
-            sb.append("\" z=\"");
-            appendNumber(sb, mesh.z(v));
-            sb.append("\"/>\n");
-            if (sb.length() > 60_000) {
-                w.append(sb);
-                sb.setLength(0);
-            }
+    /** The {@code <mesh>} element of a mesh as ASCII bytes. */
+    static byte[] meshBytes(Mesh mesh) {
+        int nv = mesh.vertexCount();
+        int nt = mesh.triangleCount();
+        Ascii b = new Ascii((int) Math.min(Integer.MAX_VALUE - 64, 48L + 72L * nv + 48L * nt));
+        b.text("   <mesh>\n    <vertices>\n");
+        for (int v = 0; v < nv; v++) {
+            b.text("     <vertex x=\"").number(mesh.x(v)).text("\" y=\"").number(mesh.y(v)).text("\" z=\"")
+                    .number(mesh.z(v)).text("\"/>\n");
         }
-        sb.append("    </vertices>\n    <triangles>\n");
-        for (int t = 0; t < mesh.triangleCount(); t++) {
-            sb.append("     <triangle v1=\"").append(mesh.corner(t, 0)).append("\" v2=\"").append(mesh.corner(t, 1))
-                    .append("\" v3=\"").append(mesh.corner(t, 2)).append("\"/>\n");
-            if (sb.length() > 60_000) {
-                w.append(sb);
-                sb.setLength(0);
-            }
+        b.text("    </vertices>\n    <triangles>\n");
+        for (int t = 0; t < nt; t++) {
+            b.text("     <triangle v1=\"").integer(mesh.corner(t, 0)).text("\" v2=\"").integer(mesh.corner(t, 1))
+                    .text("\" v3=\"").integer(mesh.corner(t, 2)).text("\"/>\n");
         }
-        w.append(sb);
-        w.write("    </triangles>\n   </mesh>\n");
+        b.text("    </triangles>\n   </mesh>\n");
+        return b.toBytes();
     }
 
     private static final int DYADIC_BITS = 16;
@@ -253,33 +242,115 @@ public final class ThreeMfWriter {
      * the same double.
      */
     static void appendNumber(StringBuilder sb, double v) {
-        double scaled = v * DYADIC_SCALE;
-        if (scaled == Math.rint(scaled) && Math.abs(scaled) < 1e15) {
-            long k = (long) scaled;
-            if (k < 0) {
-                sb.append('-');
-                k = -k;
-            }
-            long whole = k >>> DYADIC_BITS;
-            long frac = k & (DYADIC_SCALE - 1);
-            sb.append(whole);
-            if (frac != 0) {
-                // frac / 2^16 = frac * 5^16 / 10^16: exactly 16 decimal digits, trailing zeros dropped
-                String d = Long.toString(frac * FIVE_POW_16);
-                int pad = DYADIC_BITS - d.length();
-                int end = d.length();
-                while (end > 0 && d.charAt(end - 1) == '0') {
-                    end--;
-                }
-                sb.append('.');
-                for (int i = 0; i < pad; i++) {
-                    sb.append('0');
-                }
-                sb.append(d, 0, end);
-            }
-            return;
+        Ascii a = new Ascii(32);
+        a.number(v);
+        sb.append(new String(a.buf, 0, a.len, StandardCharsets.US_ASCII));
+    }
+
+    /** A growable ASCII byte buffer with exact number formatting (no String per number). */
+    static final class Ascii {
+        private byte[] buf;
+        private int len;
+
+        Ascii(int capacity) {
+            buf = new byte[Math.max(64, capacity)];
         }
-        sb.append(number(v));
+
+        private void ensure(int more) {
+            if (len + more > buf.length) {
+                long cap = Math.max((long) buf.length * 2, (long) len + more);
+                if (cap > Integer.MAX_VALUE - 16) {
+                    throw new IllegalStateException("3MF mesh text larger than 2 GB");
+                }
+                buf = java.util.Arrays.copyOf(buf, (int) cap);
+            }
+        }
+
+        /** Appends ASCII text (the mesh markup). */
+        Ascii text(String s) {
+            int n = s.length();
+            ensure(n);
+            for (int i = 0; i < n; i++) {
+                buf[len++] = (byte) s.charAt(i);
+            }
+            return this;
+        }
+
+        Ascii integer(long v) {
+            ensure(20);
+            if (v < 0) {
+                buf[len++] = '-';
+                v = -v;
+            }
+            int digits = 1;
+            for (long p = 10; digits < 19 && v >= p; p *= 10) {
+                digits++;
+            }
+            for (int i = len + digits - 1; i >= len; i--) {
+                buf[i] = (byte) ('0' + v % 10);
+                v /= 10;
+            }
+            len += digits;
+            return this;
+        }
+
+        /**
+         * {@link #number(double)}'s value. Values on a dyadic grid of 2^-16 (the kernel's grids included) are
+         * written as their exact decimal expansion without going through Double.toString; it reads back to the
+         * same double.
+         */
+        Ascii number(double v) {
+            double scaled = v * DYADIC_SCALE;
+            if (scaled == Math.rint(scaled) && Math.abs(scaled) < 1e15) {
+                long k = (long) scaled;
+                if (k < 0) {
+                    ensure(1);
+                    buf[len++] = '-';
+                    k = -k;
+                }
+                integer(k >>> DYADIC_BITS);
+                long frac = k & (DYADIC_SCALE - 1);
+                if (frac != 0) {
+                    // frac / 2^16 = frac * 5^16 / 10^16: exactly 16 decimal digits, trailing zeros dropped
+                    long d = frac * FIVE_POW_16;
+                    int digits = DYADIC_BITS;
+                    while (d % 10 == 0) {
+                        d /= 10;
+                        digits--;
+                    }
+                    ensure(1 + digits);
+                    buf[len++] = '.';
+                    for (int i = len + digits - 1; i >= len; i--) {
+                        buf[i] = (byte) ('0' + d % 10);
+                        d /= 10;
+                    }
+                    len += digits;
+                }
+                return this;
+            }
+            return text(ThreeMfWriter.number(v));
+        }
+
+        byte[] toBytes() {
+            return java.util.Arrays.copyOf(buf, len);
+        }
+    }
+
+    /** Writes strings as UTF-8 to a stream (the model's markup around the meshes). */
+    private static final class Utf8 {
+        private final OutputStream out;
+
+        Utf8(OutputStream out) {
+            this.out = out;
+        }
+
+        void write(String s) throws IOException {
+            out.write(s.getBytes(StandardCharsets.UTF_8));
+        }
+
+        void write(char c) throws IOException {
+            out.write(String.valueOf(c).getBytes(StandardCharsets.UTF_8));
+        }
     }
 
     private static String transformAttribute(Transform t) {
