@@ -89,7 +89,7 @@ public final class StackUpCheck {
                         + Findings.num(res.worstMinMm(), 3) + "…" + Findings.num(res.worstMaxMm(), 3) + " mm, RSS "
                         + Findings.num(res.rssMinMm(), 3) + "…" + Findings.num(res.rssMaxMm(), 3)
                         + " mm after runout and side play.",
-                res.worstMinMm(), 0, "mm", Double.NaN, "housing", "rim clearance",
+                res.worstMinMm(), 0, "mm", Double.NaN, "housing-ring", "rim clearance",
                 sev == Severity.OK ? "" : "enlarge the chamber bore by " + Findings.num(-2 * res.worstMinMm() + 0.4, 3)
                         + " mm or tighten the disc bores on the hub");
     }
