@@ -58,7 +58,7 @@ public final class FitCheck {
 
         Fit metalHousing = Fit.between(Iso286.zone(in.outsideDiameterMm(), in.housingClass()), od);
         PrintedSeat seat = PrintedSeat.hole(od, in.seatInterferenceMm(), pp);
-        out.add(seatFinding("FIT-BEARING-SEAT", in.bearing() + " outer ring in the printed housing seat", "cover-free and cover-drive",
+        out.add(seatFinding("FIT-BEARING-SEAT", in.bearing() + " outer ring in the printed housing seat", "cover-free, cover-drive",
                 seat, "a metal housing at " + Findings.num(in.outsideDiameterMm(), 4) + " " + in.housingClass()
                         + " would give " + range(metalHousing)));
 

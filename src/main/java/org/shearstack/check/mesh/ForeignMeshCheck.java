@@ -14,6 +14,8 @@ import org.shearstack.geom.LayeredSolid;
 import org.shearstack.geom.Mesh;
 import org.shearstack.geom.MeshCheck;
 import org.shearstack.geom.MeshReport;
+import org.shearstack.geom.Region;
+import org.shearstack.geom.Slab;
 
 /**
  * Checks meshes made elsewhere (an STL, or the objects of a 3MF placed by their build): validity of each
@@ -23,6 +25,12 @@ import org.shearstack.geom.MeshReport;
  * its sections would be guesses.
  */
 public final class ForeignMeshCheck {
+
+    /**
+     * Slices differing by less than this area are the same section (mm²; the contact tolerance of
+     * {@link org.shearstack.assembly.Interference#AREA_TOLERANCE_MM2}, far below a printed feature).
+     */
+    public static final double ALIKE_AREA_MM2 = org.shearstack.assembly.Interference.AREA_TOLERANCE_MM2;
 
     private ForeignMeshCheck() {
     }
@@ -120,9 +128,38 @@ public final class ForeignMeshCheck {
         double[] zRange = zRange(o.mesh());
         SlicePlan plan = SlicePlan.of(zRange[0], zRange[1], s.firstLayerMm(), s.limits().layerHeightMm(),
                 s.layersPerSlab(), s.maxSlabs());
-        LayeredSolid solid = org.shearstack.geom.Slicer.slabs(o.mesh(), s.ctx(), plan.boundariesMm());
+        LayeredSolid solid = mergeAlike(org.shearstack.geom.Slicer.slabs(o.mesh(), s.ctx(), plan.boundariesMm()));
         findings.addAll(Printability.check(o.name(), solid, forSlabs(s.limits(), plan.slabHeightMm())));
         return new ObjectResult(o.name(), report, Optional.of(plan), Optional.of(solid), findings);
+    }
+
+    /**
+     * Joins touching slabs whose regions differ by less than {@link #ALIKE_AREA_MM2} (slices of a vertical wall at
+     * two heights differ only by rounding), keeping the lower region: a prism becomes one slab, so each feature is
+     * checked and reported once, not once per layer.
+     */
+    static LayeredSolid mergeAlike(LayeredSolid solid) {
+        List<Slab> out = new ArrayList<>();
+        for (Slab s : solid.slabs()) {
+            int last = out.size() - 1;
+            if (last >= 0 && out.get(last).z1Mm() == s.z0Mm() && alike(out.get(last).region(), s.region())) {
+                Slab prev = out.get(last);
+                out.set(last, new Slab(prev.z0Mm(), s.z1Mm(), prev.region()));
+            } else {
+                out.add(s);
+            }
+        }
+        return LayeredSolid.of(solid.context(), out);
+    }
+
+    private static boolean alike(Region a, Region b) {
+        if (a.equals(b)) {
+            return true;
+        }
+        if (Math.abs(a.areaMm2() - b.areaMm2()) > ALIKE_AREA_MM2) {
+            return false;
+        }
+        return a.minus(b).areaMm2() + b.minus(a).areaMm2() <= ALIKE_AREA_MM2;
     }
 
     /** The limits with the slab height as the layer, so the overhang step matches the slicing. */

@@ -63,7 +63,7 @@ public final class BearingCheck {
                         + " °C); " + (warm ? "the bearings run above ordinary grease speeds and may reach about "
                                 + Findings.num(WARM_BEARING_C, 2) + " °C (from memory)"
                                 : "the bearings run within ordinary grease speeds") + ".",
-                warm ? WARM_BEARING_C : Double.NaN, in.glassTransitionC(), "degC", Double.NaN, "cover-free and cover-drive",
+                warm ? WARM_BEARING_C : Double.NaN, in.glassTransitionC(), "degC", Double.NaN, "cover-free, cover-drive",
                 "bearing seats", tSev == Severity.OK ? "" : "print the seats in PETG, ASA or ABS, or use a metal"
                         + " bearing holder; run short tests and feel the housing"));
         return out;

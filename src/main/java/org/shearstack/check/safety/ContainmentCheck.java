@@ -59,7 +59,7 @@ public final class ContainmentCheck {
                 "Cover plate" + at + ": bending stress " + Findings.mpa(cl) + " MPa clamped to " + Findings.mpa(ss)
                         + " MPa simply supported (Timoshenko & Woinowsky-Krieger uniform load), allowed "
                         + Findings.mpa(xy / in.factor()) + " MPa.",
-                mpa(ss), mpa(xy / in.factor()), "MPa", ssMargin, "cover-free and cover-drive", "cover plate",
+                mpa(ss), mpa(xy / in.factor()), "MPa", ssMargin, "cover-free, cover-drive", "cover plate",
                 coverSev == Severity.OK ? "" : "make the covers at least " + Findings.num(tNeeded, 3)
                         + " mm thick or add ribs"));
 
@@ -74,7 +74,7 @@ public final class ContainmentCheck {
                                 : ", against the pack's smallest end play " + Findings.num(in.endPlayMinMm(), 3) + " mm")
                         + (large ? "; beyond half the thickness, where plate theory stops holding" : "") + ".",
                 wSs, Double.isNaN(in.endPlayMinMm()) ? t * 500 : in.endPlayMinMm(), "mm",
-                (Double.isNaN(in.endPlayMinMm()) ? t * 500 : in.endPlayMinMm()) / wSs, "cover-free and cover-drive", "cover plate",
+                (Double.isNaN(in.endPlayMinMm()) ? t * 500 : in.endPlayMinMm()) / wSs, "cover-free, cover-drive", "cover plate",
                 defSev == Severity.OK ? "" : "stiffen the covers (thicker or ribbed) so the bearing seats stay put"));
 
         // Screws.
@@ -92,7 +92,7 @@ public final class ContainmentCheck {
                         + " (separating force " + Findings.num(force, 4) + " N on the seal diameter); the screw holds "
                         + Findings.num(screw, 3) + " N (class 8.8 proof load), the printed boss about "
                         + Findings.num(boss, 3) + " N (shear across layers, engineering estimate).",
-                perScrew, capacity / in.factor(), "N", boltMargin, "cover-free and cover-drive", "cover screws",
+                perScrew, capacity / in.factor(), "N", boltMargin, "cover-free, cover-drive", "cover screws",
                 boltMargin < 1 ? "use at least " + screwsNeeded + " screws, longer inserts, or lower the pressure" : ""));
         return out;
     }

@@ -42,6 +42,8 @@ class ForeignMeshCheckTest {
         // 10 mm cube: 1000 mm³ exactly, sliced at 0.2 mm from the bottom: 0.2 + 49 × 0.2 = 10 mm, 50 slabs
         assertEquals(1000, r.solid().orElseThrow().volumeMm3(), 1e-9);
         assertEquals(50, r.plan().orElseThrow().slabCount());
+        // every section of a prism is the same: the 50 slices join into one slab, checked once
+        assertEquals(1, r.solid().orElseThrow().slabs().size());
         assertEquals(0, r.report().genusPerShell().get(0));
     }
 
@@ -85,6 +87,7 @@ class ForeignMeshCheckTest {
         assertEquals(Severity.CAUTION, thin.severity());
         assertEquals(0.6, thin.measured(), 0.02);
         assertEquals(10.3, Math.hypot(thin.where().xMm(), thin.where().yMm()), 0.05);
+        assertEquals(1, of(r.findings(), "WALL-THIN").size(), "one wall, reported once: " + r.findings());
         // 0.3 mm wall: a whole body narrower than the nozzle does not print at all
         Mesh foil = LayeredSolid.extrusion(Region.annulus(CTX, 0, 0, 20.6, 20), 0, 5).toMesh(CTX);
         List<Finding> f = ForeignMeshCheck.checkOne(new MeshObject("foil", foil), SETTINGS).findings();
