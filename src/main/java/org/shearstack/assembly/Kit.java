@@ -78,6 +78,7 @@ public record Kit(String name, Dims dims, List<KitPart> parts, List<PrintPlates.
             }
         }
         findings.addAll(Interference.check(bodies, d, ctx));
+        findings.add(ExhaustPath.check(bodies, d, ctx));
         double bedX = v.has(ProfileKeys.BED_X) ? v.get(ProfileKeys.BED_X) : DEFAULT_BED_MM;
         double bedY = v.has(ProfileKeys.BED_Y) ? v.get(ProfileKeys.BED_Y) : DEFAULT_BED_MM;
         List<PrintPlates.Footprint> feet = printed.stream()

@@ -34,7 +34,7 @@ public final class DesignOutput {
         Path done = AtomicFolder.write(folder, dir -> {
             if (result.kit().isPresent()) {
                 // the kit writer replaces the (empty) temporary folder with the kit's files
-                KitWriter.write(result.kit().get(), dir);
+                KitWriter.writeFiles(result.kit().get(), dir);
                 KitWriter.files(result.kit().get()).forEach(f -> names.add(Path.of(f)));
             }
             for (Path p : ReportWriter.write(result.report(), dir)) {

@@ -11,10 +11,12 @@ import org.shearstack.physics.generator.GeneratorPoint;
 import org.shearstack.physics.rotor.OperatingPoint;
 import org.shearstack.physics.rotor.PerformanceMap;
 import org.shearstack.physics.rotor.TurbineModel;
+import org.shearstack.rules.sizing.SizingKeys;
 
 /**
  * The performance map with its band, and the operating point: against the spec's generator and load when given,
- * else at the design speed, else at peak shaft power.
+ * else at the target speed, else at the operating speed the sizing chose (capped at the allowable speed), else at peak
+ * shaft power.
  */
 final class PerformanceStage {
 
@@ -44,6 +46,11 @@ final class PerformanceStage {
         double target = v.optional("targets.speed");
         if (!Double.isNaN(target) && target > 0 && target < map.runawaySpeedRadPerS()) {
             return new PerformanceData(map, model.at(target), "the design speed", Optional.empty());
+        }
+        double sized = v.optional(SizingKeys.OPERATING_SPEED.name());
+        if (!Double.isNaN(sized) && sized > 0 && sized < map.runawaySpeedRadPerS()) {
+            return new PerformanceData(map, model.at(sized), "the design operating point (SIZE-PERFORMANCE)",
+                    Optional.empty());
         }
         return new PerformanceData(map, map.estimate().peakPower(), "peak shaft power", Optional.empty());
     }

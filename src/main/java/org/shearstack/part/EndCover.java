@@ -102,7 +102,7 @@ public final class EndCover {
     }
 
     /** Arc openings between the seat wall and the disc ports, webs between them. */
-    static Region exhaust(Dims d, GeometryContext ctx) {
+    public static Region exhaust(Dims d, GeometryContext ctx) {
         int n = d.coverExhaustCount();
         double webDeg = Math.toDegrees(d.coverExhaustWeb() / (d.coverExhaustInner() / 2));
         double sweep = 360.0 / n - webDeg;

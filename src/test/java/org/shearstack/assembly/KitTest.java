@@ -61,6 +61,28 @@ class KitTest {
         int discs = kit.parts().stream().filter(p -> p.name().equals("rotor-disc")).findFirst().orElseThrow().count();
         assertEquals(8, discs);
         assertFalse(kit.plates().isEmpty());
+        // the exhaust runs from the disc ports along the axis to the cover openings, and nothing turning closes it
+        Finding path = finding(kit, "ASM-EXHAUST-PATH");
+        assertEquals(Severity.OK, path.severity(), path.message());
+        assertTrue(path.measured() > 10, path.message());
+    }
+
+    @Test
+    void aClosedExhaustIsCaught() {
+        Kit kit = demoKit();
+        // a solid disc (no ports) in the pack closes the passage
+        List<Body> bodies = new java.util.ArrayList<>();
+        for (KitPart p : kit.parts()) {
+            for (int k = 0; k < p.count(); k++) {
+                bodies.add(new Body(p.name() + " #" + k, p.family(), p.rotating(), p.placements().get(k).apply(p.solid())));
+            }
+        }
+        double z = kit.dims().packZ0();
+        bodies.add(new Body("blank disc", "rotor", true, LayeredSolid.extrusion(org.shearstack.geom.Region.annulus(CTX, 0, 0,
+                kit.dims().discDiameter(), kit.dims().hexAcrossFlats() + 0.5), z, z + kit.dims().discThickness())));
+        Finding f = ExhaustPath.check(bodies, kit.dims(), CTX);
+        assertEquals(Severity.FAIL, f.severity(), f.message());
+        assertTrue(f.message().contains("blank disc"), f.message());
     }
 
     @Test

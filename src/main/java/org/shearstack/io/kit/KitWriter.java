@@ -1,15 +1,11 @@
 package org.shearstack.io.kit;
 
+
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.AtomicMoveNotSupportedException;
-import java.nio.file.FileVisitResult;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.SimpleFileVisitor;
-import java.nio.file.StandardCopyOption;
-import java.nio.file.attribute.BasicFileAttributes;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
@@ -22,6 +18,7 @@ import org.shearstack.assembly.KitPart;
 import org.shearstack.assembly.Placement;
 import org.shearstack.assembly.PrintPlates;
 import org.shearstack.geom.Transform;
+import org.shearstack.io.AtomicFolder;
 import org.shearstack.io.mesh.StlWriter;
 import org.shearstack.io.mesh.ThreeMfModel;
 import org.shearstack.io.mesh.ThreeMfWriter;
@@ -53,18 +50,9 @@ public final class KitWriter {
         return List.copyOf(f);
     }
 
+    /** Writes the kit into {@code dir} atomically: a failed run leaves the previous folder as it was. */
     public static void write(Kit kit, Path dir) throws IOException {
-        Path target = dir.toAbsolutePath().normalize();
-        Path parent = target.getParent();
-        Files.createDirectories(parent);
-        Path tmp = Files.createTempDirectory(parent, "." + target.getFileName() + ".tmp-");
-        try {
-            writeInto(kit, tmp);
-            replace(tmp, target);
-        } catch (IOException | RuntimeException e) {
-            deleteTree(tmp);
-            throw e;
-        }
+        AtomicFolder.write(dir, tmp -> writeFiles(kit, tmp));
     }
 
     /** One file to write. */
@@ -74,7 +62,8 @@ public final class KitWriter {
     }
 
     /** Writes every file; the files are independent, so they are written in parallel (order of bytes unaffected). */
-    private static void writeInto(Kit kit, Path dir) throws IOException {
+    /** Writes every file of the kit into an existing folder the caller already writes atomically. */
+    public static void writeFiles(Kit kit, Path dir) throws IOException {
         Files.createDirectories(dir.resolve("parts"));
         Files.createDirectories(dir.resolve("plates"));
         List<FileJob> jobs = new ArrayList<>();
@@ -160,54 +149,4 @@ public final class KitWriter {
         return text;
     }
 
-    private static void replace(Path tmp, Path target) throws IOException {
-        Path old = null;
-        if (Files.exists(target)) {
-            old = Files.createTempDirectory(target.getParent(), "." + target.getFileName() + ".old-");
-            Files.delete(old);
-            move(target, old);
-        }
-        try {
-            move(tmp, target);
-        } catch (IOException e) {
-            if (old != null) {
-                move(old, target);
-            }
-            throw e;
-        }
-        if (old != null) {
-            deleteTree(old);
-        }
-    }
-
-    private static void move(Path from, Path to) throws IOException {
-        try {
-            Files.move(from, to, StandardCopyOption.ATOMIC_MOVE);
-        } catch (AtomicMoveNotSupportedException e) {
-            Files.move(from, to);
-        }
-    }
-
-    private static void deleteTree(Path root) {
-        if (!Files.exists(root)) {
-            return;
-        }
-        try {
-            Files.walkFileTree(root, new SimpleFileVisitor<>() {
-                @Override
-                public FileVisitResult visitFile(Path file, BasicFileAttributes attrs) throws IOException {
-                    Files.delete(file);
-                    return FileVisitResult.CONTINUE;
-                }
-
-                @Override
-                public FileVisitResult postVisitDirectory(Path d, IOException exc) throws IOException {
-                    Files.delete(d);
-                    return FileVisitResult.CONTINUE;
-                }
-            });
-        } catch (IOException e) {
-            throw new UncheckedIOException("could not remove " + root, e);
-        }
-    }
 }
