@@ -5,7 +5,6 @@ import java.util.List;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import org.shearstack.assembly.Kit;
-import org.shearstack.assembly.KitPart;
 import org.shearstack.check.CheckCatalog;
 import org.shearstack.check.DesignValues;
 import org.shearstack.check.Finding;
@@ -50,14 +49,16 @@ final class ChecksStage {
         return new Checks(findings, safety);
     }
 
-    /** Printability of every printed part of the kit, on the solids already built. */
+    /**
+     * Printability of every printed part of the kit, on the solids already built. Parts are checked in parallel
+     * (each check is a pure function of its part); the findings keep the kit's part order.
+     */
     static List<Finding> printability(ResolvedDesign design, Kit kit) {
         PrintLimits limits = PrintLimits.of(new DesignValues(design));
-        List<Finding> out = new ArrayList<>();
-        for (KitPart p : kit.printedParts()) {
-            out.addAll(Printability.check(p.name(), p.solid(), limits));
-        }
-        return out;
+        return kit.printedParts().parallelStream()
+                .map(p -> Printability.check(p.name(), p.solid(), limits))
+                .flatMap(List::stream)
+                .toList();
     }
 
     private static RunawaySource shared(RunawayModel m) {
