@@ -1,5 +1,6 @@
 package org.shearstack.io.dyno;
 
+import org.shearstack.io.Html;
 import java.util.List;
 import java.util.Locale;
 import org.shearstack.check.Finding;

@@ -1,5 +1,6 @@
 package org.shearstack.io.family;
 
+import org.shearstack.io.Html;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -61,9 +62,9 @@ public final class FamilyChart {
         StringBuilder b = new StringBuilder();
         b.append("<svg xmlns=\"http://www.w3.org/2000/svg\" class=\"chart\" width=\"").append(WIDTH)
                 .append("\" height=\"").append(HEIGHT).append("\" viewBox=\"0 0 ").append(WIDTH).append(' ')
-                .append(HEIGHT).append("\" role=\"img\" aria-label=\"").append(Html.esc(s.title())).append("\">\n");
-        b.append("<title>").append(Html.esc(s.title())).append("</title>\n");
-        b.append("<text class=\"title\" x=\"").append(LEFT).append("\" y=\"18\">").append(Html.esc(s.title()))
+                .append(HEIGHT).append("\" role=\"img\" aria-label=\"").append(Html.escape(s.title())).append("\">\n");
+        b.append("<title>").append(Html.escape(s.title())).append("</title>\n");
+        b.append("<text class=\"title\" x=\"").append(LEFT).append("\" y=\"18\">").append(Html.escape(s.title()))
                 .append("</text>\n");
         int x0 = LEFT;
         int x1 = WIDTH - RIGHT;
@@ -92,19 +93,19 @@ public final class FamilyChart {
             for (int i = 0; i < s.categories().size(); i++) {
                 String ppx = f(px(i + 1, xa, x0, x1));
                 b.append("<text class=\"tick\" text-anchor=\"middle\" y=\"").append(y0 + 16).append("\" x=\"")
-                        .append(ppx).append("\">").append(Html.esc(s.categories().get(i))).append("</text>\n");
+                        .append(ppx).append("\">").append(Html.escape(s.categories().get(i))).append("</text>\n");
             }
         }
         b.append("<text class=\"axis\" text-anchor=\"middle\" x=\"").append((x0 + x1) / 2).append("\" y=\"")
-                .append(HEIGHT - 12).append("\">").append(Html.esc(s.xLabel())).append("</text>\n");
+                .append(HEIGHT - 12).append("\">").append(Html.escape(s.xLabel())).append("</text>\n");
         b.append("<text class=\"axis\" text-anchor=\"middle\" transform=\"translate(16 ").append((y0 + y1) / 2)
-                .append(") rotate(-90)\">").append(Html.esc(s.yLabel())).append("</text>\n");
+                .append(") rotate(-90)\">").append(Html.escape(s.yLabel())).append("</text>\n");
         if (!Double.isNaN(s.referenceY()) && s.referenceY() >= ya.lo && s.referenceY() <= ya.hi) {
             String py = f(px(s.referenceY(), ya, y0, y1));
             b.append("<line class=\"ref\" x1=\"").append(x0).append("\" x2=\"").append(x1).append("\" y1=\"")
                     .append(py).append("\" y2=\"").append(py).append("\"/>");
             b.append("<text class=\"tick ref-label\" x=\"").append(x1 - 4).append("\" text-anchor=\"end\" y=\"")
-                    .append(py).append("\" dy=\"-4\">").append(Html.esc(s.referenceLabel())).append("</text>\n");
+                    .append(py).append("\" dy=\"-4\">").append(Html.escape(s.referenceLabel())).append("</text>\n");
         }
         boolean lines = s.series().size() <= MAX_LINED_SERIES;
         for (int si = 0; si < s.series().size(); si++) {
@@ -128,10 +129,10 @@ public final class FamilyChart {
                 if (Double.isFinite(p.y())) {
                     b.append("<circle class=\"pt ").append(cls).append(p.failed() ? " fail" : "").append("\" cx=\"").append(ppx)
                             .append("\" cy=\"").append(f(px(p.y(), ya, y0, y1))).append("\" r=\"3.5\"><title>")
-                            .append(Html.esc(p.label())).append("</title></circle>\n");
+                            .append(Html.escape(p.label())).append("</title></circle>\n");
                 } else {
                     b.append("<text class=\"missing\" text-anchor=\"middle\" x=\"").append(ppx).append("\" y=\"")
-                            .append(y0 - 3).append("\">\u00d7<title>").append(Html.esc(p.label()))
+                            .append(y0 - 3).append("\">\u00d7<title>").append(Html.escape(p.label()))
                             .append(" (no value)</title></text>\n");
                 }
             }
@@ -139,7 +140,7 @@ public final class FamilyChart {
                 int ly = TOP + 8 + si * 16;
                 b.append("<circle class=\"pt ").append(cls).append("\" cx=\"").append(x1 + 14).append("\" cy=\"")
                         .append(ly).append("\" r=\"3.5\"/><text class=\"tick\" x=\"").append(x1 + 22)
-                        .append("\" y=\"").append(ly + 4).append("\">").append(Html.esc(shorten(ser.name(), 24)))
+                        .append("\" y=\"").append(ly + 4).append("\">").append(Html.escape(shorten(ser.name(), 24)))
                         .append("</text>\n");
             } else if (si == 12) {
                 b.append("<text class=\"tick\" x=\"").append(x1 + 8).append("\" y=\"").append(TOP + 8 + si * 16 + 4)

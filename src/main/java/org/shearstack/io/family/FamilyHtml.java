@@ -1,5 +1,6 @@
 package org.shearstack.io.family;
 
+import org.shearstack.io.Html;
 import java.util.Locale;
 
 /**
@@ -36,14 +37,14 @@ public final class FamilyHtml {
     public static String page(FamilyTable t) {
         StringBuilder b = new StringBuilder();
         b.append("<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n<title>")
-                .append(Html.esc(t.name())).append(" family</title>\n<style>\n").append(CSS).append("</style>\n")
+                .append(Html.escape(t.name())).append(" family</title>\n<style>\n").append(CSS).append("</style>\n")
                 .append("</head>\n<body>\n");
-        b.append("<h1>").append(Html.esc(t.name())).append(" family: ").append(t.rows().size()).append(" variant")
+        b.append("<h1>").append(Html.escape(t.name())).append(" family: ").append(t.rows().size()).append(" variant")
                 .append(t.rows().size() == 1 ? "" : "s").append("</h1>\n");
-        b.append("<p>From <code>").append(Html.esc(t.sourceFile())).append("</code>, varying ");
+        b.append("<p>From <code>").append(Html.escape(t.sourceFile())).append("</code>, varying ");
         for (int i = 0; i < t.keys().size(); i++) {
             b.append(i == 0 ? "" : i == t.keys().size() - 1 ? " and " : ", ").append("<code>")
-                    .append(Html.esc(t.keys().get(i).key())).append("</code>");
+                    .append(Html.escape(t.keys().get(i).key())).append("</code>");
         }
         b.append(t.keys().size() > 1 ? (t.zip() ? " together (zipped lists)" : " over every combination") : "")
                 .append(t.checkOnly() ? "; checked only, no meshes." : ".").append("</p>\n");
@@ -69,9 +70,9 @@ public final class FamilyHtml {
         table(b, t);
         b.append("<h2>How the figures are read</h2>\n<ul>\n");
         for (FamilyColumns.Figure f : FamilyColumns.FIGURES) {
-            b.append("<li>").append(Html.esc(f.header())).append(" (").append(Html.esc(f.unit())).append("): ")
-                    .append(f.reportPath().isEmpty() ? Html.esc(f.derivation())
-                            : "report.json <code>" + Html.esc(f.reportPath()) + "</code>")
+            b.append("<li>").append(Html.escape(f.header())).append(" (").append(Html.escape(f.unit())).append("): ")
+                    .append(f.reportPath().isEmpty() ? Html.escape(f.derivation())
+                            : "report.json <code>" + Html.escape(f.reportPath()) + "</code>")
                     .append("</li>\n");
         }
         b.append("</ul>\n</body>\n</html>\n");
@@ -81,15 +82,15 @@ public final class FamilyHtml {
     private static void table(StringBuilder b, FamilyTable t) {
         b.append("<table>\n<thead><tr><th>#</th><th>variant</th>");
         for (VariedKey k : t.keys()) {
-            b.append("<th>").append(Html.esc(k.key())).append("</th>");
+            b.append("<th>").append(Html.escape(k.key())).append("</th>");
         }
         b.append("<th>verdict</th><th>first failure</th>");
         for (FamilyColumns.Dimension d : FamilyColumns.DIMENSIONS) {
-            b.append("<th>").append(Html.esc(d.header())).append(d.unit().isEmpty() ? "" : " (" + d.unit() + ")")
+            b.append("<th>").append(Html.escape(d.header())).append(d.unit().isEmpty() ? "" : " (" + d.unit() + ")")
                     .append("</th>");
         }
         for (FamilyColumns.Figure f : FamilyColumns.FIGURES) {
-            b.append("<th>").append(Html.esc(f.header())).append(" (").append(Html.esc(f.unit())).append(")</th>");
+            b.append("<th>").append(Html.escape(f.header())).append(" (").append(Html.escape(f.unit())).append(")</th>");
         }
         b.append("</tr></thead>\n<tbody>\n");
         for (FamilyRow r : t.rows()) {
@@ -98,22 +99,22 @@ public final class FamilyHtml {
             boolean linked = r.status() != Status.BAD_INPUT && r.status() != Status.ERROR
                     && r.status() != Status.NOT_RUN;
             if (linked) {
-                b.append("<a href=\"").append(Html.esc(href(r.name()))).append("/report.html\">")
-                        .append(Html.esc(r.name())).append("</a>");
+                b.append("<a href=\"").append(Html.escape(href(r.name()))).append("/report.html\">")
+                        .append(Html.escape(r.name())).append("</a>");
             } else {
-                b.append(Html.esc(r.name()));
+                b.append(Html.escape(r.name()));
             }
             b.append("</td>");
             for (VariedValue v : r.values()) {
-                b.append("<td>").append(Html.esc(v.written())).append("</td>");
+                b.append("<td>").append(Html.escape(v.written())).append("</td>");
             }
             b.append("<td class=\"status\">").append(r.status().word()).append("</td><td class=\"why\">")
-                    .append(Html.esc(r.firstFailure())).append("</td>");
+                    .append(Html.escape(r.firstFailure())).append("</td>");
             double[] dims = r.dimensions();
             for (int i = 0; i < dims.length; i++) {
                 boolean text = FamilyColumns.DIMENSIONS.get(i).text();
                 b.append(text ? "<td>" : "<td class=\"n\">")
-                        .append(Html.esc(text ? r.dimensionTexts().get(i) : trim(sig(dims[i], 4)))).append("</td>");
+                        .append(Html.escape(text ? r.dimensionTexts().get(i) : trim(sig(dims[i], 4)))).append("</td>");
             }
             double[] figs = r.figures();
             for (int i = 0; i < figs.length; i++) {

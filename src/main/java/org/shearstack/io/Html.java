@@ -1,11 +1,12 @@
-package org.shearstack.io.dyno;
+package org.shearstack.io;
 
-/** HTML text escaping. */
-final class Html {
+/** HTML text escaping, one place for every page the tool writes. */
+public final class Html {
+
     private Html() {
     }
 
-    static String escape(String s) {
+    public static String escape(String s) {
         StringBuilder b = new StringBuilder(s.length());
         for (int i = 0; i < s.length(); i++) {
             char c = s.charAt(i);
@@ -14,6 +15,7 @@ final class Html {
                 case '<' -> b.append("&lt;");
                 case '>' -> b.append("&gt;");
                 case '"' -> b.append("&quot;");
+                case '\'' -> b.append("&#39;");
                 default -> b.append(c);
             }
         }
