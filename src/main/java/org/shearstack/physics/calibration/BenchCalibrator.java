@@ -1,5 +1,6 @@
 package org.shearstack.physics.calibration;
 
+import org.shearstack.physics.GoldenSection;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;

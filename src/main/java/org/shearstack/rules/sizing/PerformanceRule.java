@@ -1,5 +1,6 @@
 package org.shearstack.rules.sizing;
 
+import org.shearstack.physics.GoldenSection;
 import static org.shearstack.rules.SpecKeys.GENERATOR_LOAD;
 import static org.shearstack.rules.SpecKeys.GENERATOR_OPEN_CIRCUIT_VOLTAGE;
 import static org.shearstack.rules.SpecKeys.GENERATOR_OPEN_CIRCUIT_VOLTAGE_SPEED;

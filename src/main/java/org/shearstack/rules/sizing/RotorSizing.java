@@ -1,5 +1,6 @@
 package org.shearstack.rules.sizing;
 
+import org.shearstack.physics.GoldenSection;
 import static org.shearstack.rules.SpecKeys.NOZZLE_JET_ANGLE;
 import static org.shearstack.rules.SpecKeys.ROTOR_DIAMETER;
 import static org.shearstack.rules.SpecKeys.ROTOR_DISCS;

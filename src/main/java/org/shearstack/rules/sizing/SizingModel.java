@@ -1,5 +1,6 @@
 package org.shearstack.rules.sizing;
 
+import org.shearstack.physics.GoldenSection;
 import java.util.OptionalDouble;
 import org.shearstack.physics.gas.Gas;
 import org.shearstack.physics.gas.Nozzle;
